@@ -57,7 +57,9 @@ public enum Msg {
     /** {0} quantity, {1} iterations, {2} last residual. */
     NOT_CONVERGED(3),
     /** {0} detail. */
-    IMPOSSIBLE(1);
+    IMPOSSIBLE(1),
+    /** {0} duty, {1} above/below, {2} saturation temperature in C, {3} air temperature in C. */
+    DUTY_DIRECTION(4);
 
     private static final String BUNDLE = "org.finstack.core.messages";
 
