@@ -16,7 +16,10 @@ import org.finstack.core.Validity;
  * from {@link HylandWexler1983SaturationPressure}. Temperatures are in [K] at the interface; the
  * handbook's equations written in &deg;C (t = T &minus; 273.15) are evaluated internally.
  *
- * <p>Equations used (Ch. 1 numbering):
+ * <p>Equations used. Their numbers shift between editions of Ch. 1 (the enthalpy equation, for
+ * instance, is eq. 32 in the 2009 and 2013 SI editions and eq. 30 in 2017, after PsychroLib's
+ * source notes). The numbers below are given from memory and may differ by a few from the edition
+ * at hand; each equation is identified by the form printed here:
  * <ul>
  *   <li>eq. 3, standard atmosphere: p = 101325 (1 &minus; 2.25577e-5 Z)<sup>5.2559</sup> [Pa], Z in [m];</li>
  *   <li>eq. 20, humidity ratio: W = 0.621945 p<sub>w</sub> / (p &minus; p<sub>w</sub>), and its
