@@ -14,8 +14,9 @@ import org.finstack.core.OutOfRangeException;
  *       {@code R = 8.314462618 J/(mol K)}. Error against the real gas: the compressibility factor
  *       of air at 101.325 kPa is about 0.998 at 200 K, 0.9997 at 300 K and 1.0001 at 400 K
  *       (second virial coefficient of air about -35, -7.5 and +3.5 cm3/mol, from memory), so
- *       the ideal-gas density is low by at most about 0.2 % at 200 K and 1 atm; the error
- *       grows in proportion to pressure (about 0.4 % at 200 kPa and 200 K).</li>
+ *       the ideal-gas density differs from the real gas by at most about 0.2 % (too low, at
+ *       200 K and 1 atm); the error grows in proportion to pressure (about 0.4 % at 200 kPa and
+ *       200 K).</li>
  *   <li><b>Isobaric heat capacity</b>: ideal-gas part of the Lemmon et al. (2000) equation of
  *       state ({@link #CP_SOURCE}),
  *       {@code cp0/R = 1 + N7 - 12 N1 tau^-3 - 6 N2 tau^-2 - 2 N3 tau^-1 - 0.75 N6 tau^1.5
@@ -29,8 +30,8 @@ import org.finstack.core.OutOfRangeException;
  *       {@code eta0 = 0.0266958 sqrt(M T) / (sigma^2 Omega(T*))} [uPa s] with
  *       {@code Omega = exp(sum b_i (ln T*)^i)}, {@code T* = T / (epsilon/k)}, and
  *       {@code lambda0 = N1 eta0 + N2 tau^t2 + N3 tau^t3} [mW/(m K)]. The residual (density)
- *       terms are left out; at 1 atm they add about +0.1 % to 0.2 % to the viscosity and
- *       +0.2 % to 0.4 % to the conductivity between 200 K and 400 K (estimated from the
+ *       terms are left out; at 1 atm they would add about +0.1 % to the viscosity and +0.1 %
+ *       to +0.3 % to the conductivity between 200 K and 400 K (estimated from the leading
  *       residual terms of the same paper), growing in proportion to density.</li>
  * </ul>
  *
