@@ -1,0 +1,66 @@
+package org.finstack.airside;
+
+import java.util.Collections;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+import org.finstack.core.InputException;
+import org.finstack.core.Msg;
+
+/**
+ * The air-side correlations Finstack knows, keyed by their {@code ID} constants. Immutable.
+ *
+ * <p>Fin types: "plain", "wavy", "louvered". At present only the plain fin has a correlation
+ * ({@link WangChiChang2000PlainFin}); asking for the others returns an empty list.
+ */
+public final class AirSideCorrelations {
+
+    /** The fin types a surface may have (see {@link AirSideSurface.Pattern}). */
+    public static final List<String> FIN_TYPES = List.of("plain", "wavy", "louvered");
+
+    private static final Map<String, AirSideCorrelation> BY_ID;
+
+    static {
+        Map<String, AirSideCorrelation> m = new LinkedHashMap<>();
+        for (AirSideCorrelation c : List.<AirSideCorrelation>of(WangChiChang2000PlainFin.INSTANCE)) {
+            if (m.put(c.id(), c) != null) {
+                throw new IllegalStateException("duplicate correlation id " + c.id());
+            }
+        }
+        BY_ID = Collections.unmodifiableMap(m);
+    }
+
+    private AirSideCorrelations() {
+    }
+
+    /** @return every correlation, in registration order */
+    public static List<AirSideCorrelation> all() {
+        return List.copyOf(BY_ID.values());
+    }
+
+    /**
+     * @param id a correlation's {@link AirSideCorrelation#id()}
+     * @return the correlation
+     * @throws InputException (field {@code airSide.correlation}) if no correlation has that id
+     */
+    public static AirSideCorrelation byId(String id) {
+        AirSideCorrelation c = id == null ? null : BY_ID.get(id);
+        if (c == null) {
+            throw new InputException("airSide.correlation", Msg.UNKNOWN_NAME, id, String.join(", ", BY_ID.keySet()));
+        }
+        return c;
+    }
+
+    /**
+     * @param finType one of {@link #FIN_TYPES}
+     * @return the correlations fitted to that fin type (possibly none)
+     * @throws InputException (field {@code airSide.finType}) for an unknown fin type
+     */
+    public static List<AirSideCorrelation> byFinType(String finType) {
+        if (finType == null || !FIN_TYPES.contains(finType)) {
+            throw new InputException("airSide.finType", Msg.UNKNOWN_NAME, finType, String.join(", ", FIN_TYPES));
+        }
+        return BY_ID.values().stream().filter(c -> c.finType().equals(finType)).toList();
+    }
+}
