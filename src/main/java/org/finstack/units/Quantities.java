@@ -48,7 +48,7 @@ import org.finstack.core.Msg;
  * 1e-4 to 1e9 and in e-notation outside; the display unit comes from {@link #defaultUnit}.
  *
  * <p>Worked example (repeated in {@code QuantitiesTest.javadocExample}): {@code parse("coil.finPitch",
- * "12 fpi", Dimension.FIN_PITCH)} = 0.0021166667 m, and {@code format(0.0021166667,
+ * "12 fpi", Dimension.FIN_PITCH)} = 0.00211666667 m, and {@code format(0.00211666667,
  * Dimension.FIN_PITCH, UnitSystem.SI)} = {@code "2.117 mm"}.
  */
 public final class Quantities {
