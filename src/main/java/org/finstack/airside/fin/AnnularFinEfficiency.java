@@ -34,7 +34,10 @@ import org.finstack.core.math.Bessel;
  *
  * <p>Validity: exact for the one-dimensional model; that model holds for Bi = h (t/2)/k &le; 0.1
  * (common practice). The equivalent-radius variant adds the approximation of the hexagonal or
- * rectangular fin by an annulus, for which no published scatter was found.
+ * rectangular fin by an annulus, for which no published scatter was found; against a
+ * two-dimensional finite-difference solution of the continuous plate fin (reference data
+ * {@code fin_plate2d_fd.csv}) it lies within 2&nbsp;% for eta_f &ge; 0.5 and up to 6.3&nbsp;%
+ * low below that.
  *
  * <p>Example: r1 = 5 mm, r2 = 12 mm, t = 0.2 mm, h = 80 W/(m2 K), k = 200 W/(m K), no tip
  * correction: eta_f = 0.908751. The same as the plate-fin method for the cell in the example of
