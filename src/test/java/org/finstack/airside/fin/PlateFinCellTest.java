@@ -13,7 +13,7 @@ class PlateFinCellTest {
     /** Derived lengths: collar radius and the distance to the nearest tube of the next row. */
     @Test
     void derivedLengths() {
-        PlateFinCell s = new PlateFinCell(10e-3, 0.1e-3, 24e-3, 9e-3 * 2, true);
+        PlateFinCell s = new PlateFinCell(10e-3, 0.1e-3, 24e-3, 18e-3, true);
         assertThat(s.collarRadius()).isEqualTo(5e-3);
         assertThat(s.diagonalPitch()).isCloseTo(Math.sqrt(12e-3 * 12e-3 + 18e-3 * 18e-3), within());
         PlateFinCell i = new PlateFinCell(10e-3, 0.1e-3, 24e-3, 18e-3, false);

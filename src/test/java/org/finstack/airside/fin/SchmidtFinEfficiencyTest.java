@@ -122,7 +122,7 @@ class SchmidtFinEfficiencyTest {
     /** Staggered: XM = Pt/2 and XL = half the diagonal pitch, as Wang, Chi &amp; Chang define them. */
     @Test
     void staggeredUsesHalfTransverseAndHalfDiagonalPitch() {
-        PlateFinCell cell = new PlateFinCell(10e-3, 1e-4, 21e-3, 12.7e-3 + 0.0, true);
+        PlateFinCell cell = new PlateFinCell(10e-3, 1e-4, 21e-3, 12.7e-3, true);
         double xm = 10.5;
         double xl = Math.hypot(10.5, 12.7) / 2;
         assertRelative(1.27 * (xm / 5) * Math.sqrt(xl / xm - 0.3),
