@@ -16,6 +16,9 @@ import org.finstack.core.Citation;
  * pure counterflow, the limit of many passes (Pignotti &amp; Cordero 1983), which overstates the
  * effectiveness slightly (see {@link EpsilonNtu#effectiveness}).
  *
+ * <p>Worked example: two rows, air C<sub>min</sub>, NTU = 2, C<sub>r</sub> = 0.5:
+ * {@code EpsilonNtu.effectiveness(CounterCrossflow.rows(2, true), 2, 0.5)} = 0.752307.
+ *
  * @param rows      number of tube rows in the air-flow direction, each one pass [-], at least 1
  * @param airIsCmin whether the air has the smaller capacity rate (the usual case for a
  *                  single-phase liquid coil); false when the tube fluid has it
@@ -34,7 +37,12 @@ public record CounterCrossflow(int rows, boolean airIsCmin) implements Arrangeme
     /** Accepted id form; "row" is accepted for "rows". */
     static final Pattern ID = Pattern.compile("counter-crossflow-(\\d{1,6})-rows?-air-(cmin|cmax)");
 
-    /** Validates the number of rows. */
+    /**
+     * Validates the number of rows.
+     *
+     * @param rows      number of tube rows [-], at least 1
+     * @param airIsCmin whether the air has the smaller capacity rate
+     */
     public CounterCrossflow {
         Check.atLeastOne("rows", rows);
     }

@@ -110,6 +110,7 @@ public final class EpsilonNtu {
             case COUNTERFLOW -> counterflow(ntu, cr);
             case PARALLEL_FLOW -> -Math.expm1(-ntu * (1 + cr)) / (1 + cr);
             case CROSSFLOW_BOTH_UNMIXED -> crossflowUnmixedSeries(ntu, cr);
+            // exponents 0.22 and 0.78: Incropera & DeWitt 2002, Table 11.3
             case CROSSFLOW_BOTH_UNMIXED_APPROX ->
                     -Math.expm1(Math.pow(ntu, 0.22) / cr * Math.expm1(-cr * Math.pow(ntu, 0.78)));
             case CROSSFLOW_CMAX_MIXED -> -Math.expm1(cr * Math.expm1(-ntu)) / cr;
@@ -248,6 +249,8 @@ public final class EpsilonNtu {
      * @param ratio C_air / C_tube
      */
     static double tubeEffectiveness(int n, double k, double ratio) {
+        // coefficients of D for 1 to 4 rows: ESDU 86018 (see the class Javadoc); the 4-row form as
+        // re-derived for this project from the same model and checked by numerical integration
         double c = k * ratio;
         double h = 1 - k / 2;
         if (n == 1) {
