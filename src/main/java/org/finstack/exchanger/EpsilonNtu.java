@@ -45,7 +45,9 @@ import org.finstack.core.Validity;
  * e<sup>4c</sup>;
  * <br>and eps = P<sub>tube</sub> / C<sub>r</sub> when the air has C<sub>min</sub>, eps =
  * P<sub>tube</sub> when the tube fluid has it. N = 1 coincides with the one-fluid-mixed crossflow
- * relations. Beyond 4 rows pure counterflow is used: multipass counter-crossflow tends to
+ * relations. The 1- to 3-row forms are ESDU 86018's; the 4-row form was derived for this project
+ * from the same model by integrating row by row, and all four agree with a numerical solution of
+ * that model to 1e-8 (see the tests). Beyond 4 rows pure counterflow is used: multipass counter-crossflow tends to
  * counterflow as the passes increase (Pignotti &amp; Cordero 1983; Kays &amp; London 1984). It is an
  * upper bound. At 4 rows the gap to counterflow is up to 2.2 % for NTU &le; 3, 3.8 % for NTU &le;
  * 5 and 6.7 % for NTU &le; 10 (largest at C<sub>r</sub> = 1); numerical integration of 5 and 6
