@@ -3,7 +3,9 @@ package org.finstack.airside;
 import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
+import java.util.stream.Collectors;
 
 import org.finstack.core.InputException;
 import org.finstack.core.Msg;
@@ -50,6 +52,25 @@ public final class AirSideCorrelations {
             throw new InputException("airSide.correlation", Msg.UNKNOWN_NAME, id, String.join(", ", BY_ID.keySet()));
         }
         return c;
+    }
+
+    /**
+     * The correlation a rating uses for a fin type: the first registered for it.
+     *
+     * @param field   the input field naming the fin type, for messages
+     * @param finType a fin type as the user wrote it (any case)
+     * @return the correlation
+     * @throws InputException naming the field, for an unknown fin type or one without a correlation yet
+     */
+    public static AirSideCorrelation standard(String field, String finType) {
+        String type = finType == null ? "" : finType.strip().toLowerCase(Locale.ROOT);
+        String ready = BY_ID.values().stream().map(AirSideCorrelation::finType).distinct()
+                .collect(Collectors.joining(", "));
+        if (!FIN_TYPES.contains(type)) {
+            throw new InputException(field, Msg.UNKNOWN_NAME, finType, ready);
+        }
+        return BY_ID.values().stream().filter(c -> c.finType().equals(type)).findFirst()
+                .orElseThrow(() -> new InputException(field, Msg.NO_CORRELATION, type, ready));
     }
 
     /**

@@ -13,8 +13,10 @@ import java.util.Map;
 public final class Validity {
 
     private final Map<String, Limit> limits;
+    private final String basis;
 
-    private Validity(List<Limit> limits) {
+    private Validity(String basis, List<Limit> limits) {
+        this.basis = basis;
         Map<String, Limit> m = new LinkedHashMap<>();
         for (Limit l : limits) {
             if (m.put(l.variable(), l) != null) {
@@ -29,7 +31,19 @@ public final class Validity {
      * @return the validity range
      */
     public static Validity of(Limit... limits) {
-        return new Validity(List.of(limits));
+        return new Validity("published range", List.of(limits));
+    }
+
+    /**
+     * A range not stated by the method's source but assessed otherwise (e.g. against an exact
+     * solution); warnings name that basis instead of calling the range published.
+     *
+     * @param basis  how the range was found, completing "outside the range ..."
+     * @param limits the limits
+     * @return the validity range
+     */
+    public static Validity assessed(String basis, Limit... limits) {
+        return new Validity("range " + basis + ",", List.of(limits));
     }
 
     /** @return the limits, keyed by variable name */
@@ -65,8 +79,8 @@ public final class Validity {
             return true;
         }
         String unit = l.unit().isEmpty() ? "" : " " + l.unit();
-        warnings.add(String.format(Locale.ROOT, "%s: %s = %s%s is outside the published range %s to %s%s",
-                method, variable, Numbers.brief(value), unit, Numbers.brief(l.min()),
+        warnings.add(String.format(Locale.ROOT, "%s: %s = %s%s is outside the %s %s to %s%s",
+                method, variable, Numbers.brief(value), unit, basis, Numbers.brief(l.min()),
                 Numbers.brief(l.max()), unit));
         return false;
     }

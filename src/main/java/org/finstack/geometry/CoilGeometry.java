@@ -25,7 +25,6 @@ import org.finstack.material.Material;
  * @param tubesPerRow       tubes in each row (sets the face height)
  * @param finnedLength      finned length of each tube (the face width) [m]
  * @param finType           fin type id ({@code plain}, {@code wavy}, {@code louvered}, ...)
- * @param finPattern        enhanced-fin shape parameters ({@link FinPattern#NONE} for plain)
  * @param finPitch          fin spacing centre to centre [m] (1 / fin density)
  * @param finThickness      fin thickness [m]
  * @param finMaterial       fin material
@@ -35,7 +34,7 @@ import org.finstack.material.Material;
  */
 public record CoilGeometry(double tubeOuterDiameter, double tubeWall, Material tubeMaterial,
         Arrangement arrangement, double transversePitch, double rowPitch, int rows, int tubesPerRow,
-        double finnedLength, String finType, FinPattern finPattern, double finPitch, double finThickness,
+        double finnedLength, String finType, double finPitch, double finThickness,
         Material finMaterial, int circuits, Coating coating, double coatingThickness) {
 
     /** Validates the geometry; impossible coils are refused naming the field and the limit. */
@@ -53,7 +52,6 @@ public record CoilGeometry(double tubeOuterDiameter, double tubeWall, Material t
         Check.atLeastOne("tubesPerRow", tubesPerRow);
         Check.positive("finnedLength", finnedLength);
         Objects.requireNonNull(finType, "finType");
-        finPattern = finPattern == null ? FinPattern.NONE : finPattern;
         Check.positive("finPitch", finPitch);
         Check.positive("finThickness", finThickness);
         if (finPitch <= finThickness) {
@@ -117,7 +115,7 @@ public record CoilGeometry(double tubeOuterDiameter, double tubeWall, Material t
      */
     public CoilGeometry withFinPitch(double pitch) {
         return new CoilGeometry(tubeOuterDiameter, tubeWall, tubeMaterial, arrangement, transversePitch, rowPitch,
-                rows, tubesPerRow, finnedLength, finType, finPattern, pitch, finThickness, finMaterial, circuits,
+                rows, tubesPerRow, finnedLength, finType, pitch, finThickness, finMaterial, circuits,
                 coating, coatingThickness);
     }
 
@@ -127,7 +125,7 @@ public record CoilGeometry(double tubeOuterDiameter, double tubeWall, Material t
      */
     public CoilGeometry withRows(int n) {
         return new CoilGeometry(tubeOuterDiameter, tubeWall, tubeMaterial, arrangement, transversePitch, rowPitch,
-                n, tubesPerRow, finnedLength, finType, finPattern, finPitch, finThickness, finMaterial, circuits,
+                n, tubesPerRow, finnedLength, finType, finPitch, finThickness, finMaterial, circuits,
                 coating, coatingThickness);
     }
 
@@ -137,7 +135,7 @@ public record CoilGeometry(double tubeOuterDiameter, double tubeWall, Material t
      */
     public CoilGeometry withFinnedLength(double length) {
         return new CoilGeometry(tubeOuterDiameter, tubeWall, tubeMaterial, arrangement, transversePitch, rowPitch,
-                rows, tubesPerRow, length, finType, finPattern, finPitch, finThickness, finMaterial, circuits,
+                rows, tubesPerRow, length, finType, finPitch, finThickness, finMaterial, circuits,
                 coating, coatingThickness);
     }
 
@@ -147,7 +145,7 @@ public record CoilGeometry(double tubeOuterDiameter, double tubeWall, Material t
      */
     public CoilGeometry withTubeWall(double wall) {
         return new CoilGeometry(tubeOuterDiameter, wall, tubeMaterial, arrangement, transversePitch, rowPitch,
-                rows, tubesPerRow, finnedLength, finType, finPattern, finPitch, finThickness, finMaterial, circuits,
+                rows, tubesPerRow, finnedLength, finType, finPitch, finThickness, finMaterial, circuits,
                 coating, coatingThickness);
     }
 
@@ -157,7 +155,7 @@ public record CoilGeometry(double tubeOuterDiameter, double tubeWall, Material t
      */
     public CoilGeometry withTubeMaterial(Material material) {
         return new CoilGeometry(tubeOuterDiameter, tubeWall, material, arrangement, transversePitch, rowPitch,
-                rows, tubesPerRow, finnedLength, finType, finPattern, finPitch, finThickness, finMaterial, circuits,
+                rows, tubesPerRow, finnedLength, finType, finPitch, finThickness, finMaterial, circuits,
                 coating, coatingThickness);
     }
 
@@ -167,7 +165,7 @@ public record CoilGeometry(double tubeOuterDiameter, double tubeWall, Material t
      */
     public CoilGeometry withFinThickness(double thickness) {
         return new CoilGeometry(tubeOuterDiameter, tubeWall, tubeMaterial, arrangement, transversePitch, rowPitch,
-                rows, tubesPerRow, finnedLength, finType, finPattern, finPitch, thickness, finMaterial, circuits,
+                rows, tubesPerRow, finnedLength, finType, finPitch, thickness, finMaterial, circuits,
                 coating, coatingThickness);
     }
 }

@@ -302,8 +302,8 @@ final class Catalogue {
                 "W/(m·K)", "Btu/(h·ft·°F)");
         List<Unit> pitch = new ArrayList<>(lengths);
         pitch.add(Unit.reciprocal("fpi", INCH, "fins/in", "fins/inch", "fins per inch", "fin/in"));
-        // "fpm" in the context of a fin pitch means fins per metre, as the task defines it
-        pitch.add(Unit.reciprocal("fins/m", 1, "fins per metre", "fins per meter", "fin/m", "fpm"));
+        // "fpm" is not accepted here: in the trade it is feet per minute, a velocity
+        pitch.add(Unit.reciprocal("fins/m", 1, "fins per metre", "fins per meter", "fin/m"));
         put(m, Dimension.FIN_PITCH, pitch, "mm", "fpi");
         put(m, Dimension.DENSITY, List.of(
                 Unit.linear("kg/m3", 1),

@@ -38,7 +38,7 @@ import org.finstack.core.Msg;
  * 5/9 K. A {@link Dimension#TEMPERATURE} in °C or °F is read with its offset, and "5 K" as a
  * temperature is 5 kelvin absolute.</li>
  * <li>{@link Dimension#FIN_PITCH} accepts a length (the distance between fins) or a fin density:
- * n fpi gives a pitch of 0.0254/n m, n fins/m (also "fpm") a pitch of 1/n m.</li>
+ * n fpi gives a pitch of 0.0254/n m, n fins/m a pitch of 1/n m.</li>
  * <li>Btu is the International Table Btu, 1055.05585262 J; MBH is 1000 Btu/h; a ton of
  * refrigeration (TR, ton, tons) is 12 000 Btu/h.</li>
  * </ul>

@@ -41,7 +41,7 @@ class CoilGeometryTest {
     void astmB280CopperTubeWeightPerFoot() {
         CoilGeometry g = Coils.exampleCondenser().withTubeWall(0.030 * 0.0254);
         CoilGeometry one = new CoilGeometry(0.375 * 0.0254, 0.030 * 0.0254, g.tubeMaterial(), g.arrangement(),
-                g.transversePitch(), g.rowPitch(), 1, 1, FOOT, "plain", FinPattern.NONE, g.finPitch(),
+                g.transversePitch(), g.rowPitch(), 1, 1, FOOT, "plain", g.finPitch(),
                 g.finThickness(), g.finMaterial(), 1, null, 0);
         double lbPerFt = one.derive().tubeMass() / 0.45359237; // NIST SP 811: 1 lb = 0.45359237 kg
         assertRelative(0.126, lbPerFt, 0.01, "ASTM B280 3/8 x 0.030 copper tube weight");
@@ -89,7 +89,7 @@ class CoilGeometryTest {
         double open = wide.finnedLength() - d.finCount() * wide.finThickness();
         assertRelative(wide.tubesPerRow() * transverse * open, d.minFlowArea(), 1e-12, "transverse gap governs");
         CoilGeometry tight = new CoilGeometry(wide.tubeOuterDiameter(), wide.tubeWall(), wide.tubeMaterial(),
-                Arrangement.STAGGERED, 30e-3, 11e-3, 2, 16, 0.9, "plain", FinPattern.NONE, 2.1e-3, 0.115e-3,
+                Arrangement.STAGGERED, 30e-3, 11e-3, 2, 16, 0.9, "plain", 2.1e-3, 0.115e-3,
                 wide.finMaterial(), 4, null, 0);
         DerivedGeometry t = tight.derive();
         double diagonal = 2 * (Math.hypot(15e-3, 11e-3) - t.collarDiameter());
@@ -106,13 +106,13 @@ class CoilGeometryTest {
         assertThatThrownBy(() -> g.withRows(0)).isInstanceOf(InputException.class)
                 .hasMessageStartingWith("rows:");
         assertThatThrownBy(() -> new CoilGeometry(9.52e-3, 0.3e-3, g.tubeMaterial(), Arrangement.STAGGERED, 9.6e-3,
-                22e-3, 3, 16, 0.9, "plain", FinPattern.NONE, 2.1e-3, 0.115e-3, g.finMaterial(), 4, null, 0))
+                22e-3, 3, 16, 0.9, "plain", 2.1e-3, 0.115e-3, g.finMaterial(), 4, null, 0))
                 .isInstanceOf(InputException.class).hasMessageStartingWith("transversePitch:");
         assertThatThrownBy(() -> new CoilGeometry(9.52e-3, 0.3e-3, g.tubeMaterial(), Arrangement.INLINE, 25.4e-3,
-                9e-3, 3, 16, 0.9, "plain", FinPattern.NONE, 2.1e-3, 0.115e-3, g.finMaterial(), 4, null, 0))
+                9e-3, 3, 16, 0.9, "plain", 2.1e-3, 0.115e-3, g.finMaterial(), 4, null, 0))
                 .isInstanceOf(InputException.class).hasMessageStartingWith("rowPitch:");
         assertThatThrownBy(() -> new CoilGeometry(9.52e-3, 0.3e-3, g.tubeMaterial(), Arrangement.INLINE, 25.4e-3,
-                22e-3, 3, 16, 0.9, "plain", FinPattern.NONE, 2.1e-3, 0.115e-3, g.finMaterial(), 49, null, 0))
+                22e-3, 3, 16, 0.9, "plain", 2.1e-3, 0.115e-3, g.finMaterial(), 49, null, 0))
                 .isInstanceOf(InputException.class).hasMessageStartingWith("circuits:");
     }
 }

@@ -2,7 +2,6 @@ package org.finstack.testing;
 
 import org.finstack.geometry.Arrangement;
 import org.finstack.geometry.CoilGeometry;
-import org.finstack.geometry.FinPattern;
 import org.finstack.material.Materials;
 
 /** Coils used by several tests. */
@@ -22,7 +21,7 @@ public final class Coils {
     public static CoilGeometry exampleCondenser() {
         Materials lib = Materials.library();
         return new CoilGeometry(9.52e-3, 0.30e-3, lib.tube("t", "copper"), Arrangement.STAGGERED, 25.4e-3, 22.0e-3,
-                3, 16, 0.900, "plain", FinPattern.NONE, 2.1e-3, 0.115e-3, lib.fin("f", "aluminium"), 4, null, 0);
+                3, 16, 0.900, "plain", 2.1e-3, 0.115e-3, lib.fin("f", "aluminium"), 4, null, 0);
     }
 
     /**
@@ -37,7 +36,7 @@ public final class Coils {
         Materials lib = Materials.library();
         double t = 0.013 * INCH;
         return new CoilGeometry(0.402 * INCH - 2 * t, 0.025 * INCH, lib.tube("t", "copper"), Arrangement.STAGGERED,
-                1.00 * INCH, 0.866 * INCH, rows, 10, 0.5, "plain", FinPattern.NONE, INCH / 8.0, t,
+                1.00 * INCH, 0.866 * INCH, rows, 10, 0.5, "plain", INCH / 8.0, t,
                 lib.fin("f", "aluminium"), 1, null, 0);
     }
 }

@@ -131,7 +131,8 @@ class QuantitiesTest {
         Reference.assertRelative(INCH / 12, p("12 fins/in", FIN_PITCH), TIGHT, "fins/in");
         Reference.assertRelative(0.0021, p("2.1 mm", FIN_PITCH), TIGHT, "2.1 mm");
         Reference.assertRelative(1.0 / 472, p("472 fins/m", FIN_PITCH), TIGHT, "472 fins/m");
-        Reference.assertRelative(1.0 / 472, p("472 fpm", FIN_PITCH), TIGHT, "472 fpm (fins per metre)");
+        assertThatThrownBy(() -> p("472 fpm", FIN_PITCH)).as("fpm is a velocity in the trade (common practice)")
+                .isInstanceOf(InputException.class);
         assertThat(error("coil.finPitch", "0 fpi", FIN_PITCH).msg()).isEqualTo(Msg.NOT_POSITIVE);
         assertThat(error("coil.finPitch", "-12 fpi", FIN_PITCH).msg()).isEqualTo(Msg.NOT_POSITIVE);
         assertThat(Quantities.toUnit(INCH / 12, FIN_PITCH, "fpi")).isCloseTo(12, org.assertj.core.data.Offset.offset(1e-12));

@@ -68,7 +68,7 @@ public final class SchmidtFinEfficiency implements FinEfficiencyMethod {
      * Re/r 1 to 8 and eta 0.5 to 1 (where this implementation agrees with the exact annular
      * solution within 2 %; no published range found).
      */
-    public static final Validity VALIDITY = Validity.of(
+    public static final Validity VALIDITY = Validity.assessed("checked against exact and 2-D fin solutions",
             Limit.of("Bi", 0, 0.1),
             Limit.of("Re/r", 1, 8),
             Limit.of("eta", 0.5, 1));

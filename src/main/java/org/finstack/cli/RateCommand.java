@@ -1,0 +1,109 @@
+package org.finstack.cli;
+
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.SerializationFeature;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.Map;
+import java.util.concurrent.Callable;
+import org.finstack.coil.CoilCase;
+import org.finstack.coil.IsothermalCoilModel;
+import org.finstack.coil.Rating;
+import org.finstack.core.Citation;
+import org.finstack.geometry.DerivedGeometry;
+import org.finstack.io.CaseFiles;
+import org.finstack.io.RatingJson;
+import org.finstack.units.Dimension;
+import org.finstack.units.UnitSystem;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+
+/** {@code finstack rate CASE.json}: rates one case file and prints the result. */
+@Command(name = "rate", mixinStandardHelpOptions = true,
+        description = "Rates the coil described in a case file.")
+final class RateCommand implements Callable<Integer> {
+
+    @Spec
+    private CommandSpec spec;
+
+    @Parameters(index = "0", paramLabel = "CASE", description = "case file (JSON)")
+    private Path caseFile;
+
+    @Option(names = "--units", paramLabel = "SYSTEM", defaultValue = "si",
+            description = "units of the printed table: si or us (default: ${DEFAULT-VALUE})")
+    private String units;
+
+    @Option(names = "--json", description = "print one JSON object (SI values) instead of a table")
+    private boolean json;
+
+    @Override
+    public Integer call() throws Exception {
+        UnitSystem system = Output.system(units);
+        CoilCase c = CaseFiles.read(caseFile);
+        Rating r = new IsothermalCoilModel().rate(c);
+        PrintWriter out = spec.commandLine().getOut();
+        if (json) {
+            ObjectNode root = Output.envelope("rate", caseFile);
+            root.set("results", RatingJson.results(r));
+            out.println(new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT).writeValueAsString(root));
+        } else {
+            table(out, c, r, system);
+        }
+        return 0;
+    }
+
+    private static void table(PrintWriter out, CoilCase c, Rating r, UnitSystem u) {
+        DerivedGeometry g = r.geometry();
+        Output.Table t = new Output.Table(out, u);
+        out.println("Rating of " + c.coil().rows() + " rows x " + c.coil().tubesPerRow() + " tubes, "
+                + c.coil().finType() + " fins, " + c.refrigerant().fluid() + " " + c.refrigerant().duty().id()
+                + " (" + r.model() + " model)");
+        t.section("Result");
+        t.row("capacity", r.capacity(), Dimension.HEAT_FLOW);
+        t.row("air in", r.airInletTemperature(), Dimension.TEMPERATURE);
+        t.row("air out", r.airOutletTemperature(), Dimension.TEMPERATURE);
+        t.row("saturation", c.refrigerant().saturationTemperature(), Dimension.TEMPERATURE);
+        t.row("airflow", r.airVolumeFlow(), Dimension.VOLUME_FLOW);
+        t.row("face velocity", r.faceVelocity(), Dimension.VELOCITY);
+        t.row("air mass flow", r.airMassFlow(), Dimension.MASS_FLOW);
+        t.row("air pressure drop", r.airPressureDrop(), Dimension.PRESSURE_DIFFERENCE);
+        t.section("Heat transfer");
+        t.row("air-side coefficient", r.airCoefficient(), Dimension.HEAT_TRANSFER_COEFFICIENT);
+        t.plain("fin efficiency", r.finEfficiency());
+        t.plain("surface effectiveness", r.surfaceEffectiveness());
+        t.row("UA", r.ua(), Dimension.UA);
+        t.plain("NTU", r.ntu());
+        t.plain("effectiveness", r.effectiveness());
+        t.plain("Reynolds (collar)", r.reynoldsDc());
+        t.plain("Colburn j", r.colburnJ());
+        t.plain("friction f", r.frictionF());
+        t.row("max. velocity", r.maxVelocity(), Dimension.VELOCITY);
+        t.section("Where the heat is held back (share of 1/UA)");
+        for (Map.Entry<String, Double> e : r.resistances().shares().entrySet()) {
+            t.share(Output.RESISTANCE_LABELS.get(e.getKey()), e.getValue());
+        }
+        t.section("Geometry");
+        t.row("face area", g.faceArea(), Dimension.AREA);
+        t.row("air-side area", g.airSideArea(), Dimension.AREA);
+        t.row("fin area", g.finArea(), Dimension.AREA);
+        t.row("inside area", g.insideArea(), Dimension.AREA);
+        t.row("min. free-flow area", g.minFlowArea(), Dimension.AREA);
+        t.plain("free-flow / face", g.sigma());
+        t.row("hydraulic diameter", g.hydraulicDiameter(), Dimension.LENGTH);
+        t.row("collar diameter", g.collarDiameter(), Dimension.LENGTH);
+        t.row("internal volume", g.internalVolume(), Dimension.VOLUME);
+        t.row("metal mass", g.metalMass(), Dimension.MASS);
+        if (!r.warnings().isEmpty()) {
+            t.section("Warnings");
+            r.warnings().forEach(w -> out.println("  ! " + w));
+        }
+        t.section("Methods");
+        for (Citation m : r.methods()) {
+            out.println("  " + m.key() + " - " + m.reference());
+        }
+    }
+}

@@ -1,0 +1,5 @@
+/**
+ * Rating models that combine geometry, air side, refrigerant side and exchanger relations into a
+ * {@link org.finstack.coil.Rating}.
+ */
+package org.finstack.coil;

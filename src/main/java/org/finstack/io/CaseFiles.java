@@ -1,0 +1,168 @@
+package org.finstack.io;
+
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.databind.DeserializationFeature;
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
+import java.nio.file.Path;
+import java.util.Set;
+import org.finstack.coil.AirInlet;
+import org.finstack.coil.CoilCase;
+import org.finstack.coil.Duty;
+import org.finstack.coil.FoulingResistances;
+import org.finstack.coil.RefrigerantSide;
+import org.finstack.core.InputException;
+import org.finstack.core.Msg;
+import org.finstack.geometry.Arrangement;
+import org.finstack.geometry.CoilGeometry;
+import org.finstack.material.Coating;
+import org.finstack.material.Materials;
+import org.finstack.units.Dimension;
+
+/**
+ * Reads case files (format version 1). A case is one JSON object with the parts {@code coil},
+ * {@code air}, {@code refrigerant} and optionally {@code fouling}; quantities are strings
+ * "number unit" or bare SI numbers. Every error names the field by its dotted path.
+ */
+public final class CaseFiles {
+
+    /** Newest case-file format version this reader understands. */
+    public static final int VERSION = 1;
+
+    private static final ObjectMapper MAPPER = new ObjectMapper()
+            .enable(DeserializationFeature.FAIL_ON_READING_DUP_TREE_KEY)
+            .enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS);
+
+    private static final Set<String> TOP = Set.of("version", "name", "description", "coil", "air",
+            "refrigerant", "fouling");
+    private static final Set<String> COIL = Set.of("tubeOuterDiameter", "tubeWall", "tubeMaterial", "arrangement",
+            "transversePitch", "rowPitch", "rows", "tubesPerRow", "finnedLength", "finType", "finPitch",
+            "finThickness", "finMaterial", "circuits", "coating", "coatingThickness");
+    private static final Set<String> AIR = Set.of("inletTemperature", "faceVelocity", "volumeFlow", "pressure",
+            "relativeHumidity");
+    private static final Set<String> REFRIGERANT = Set.of("fluid", "duty", "saturationTemperature",
+            "insideCoefficient");
+    private static final Set<String> FOULING = Set.of("airSide", "inside", "contact");
+
+    /** Standard atmosphere [Pa] (ISO 2533; NIST SP 811 Appendix B), the default barometric pressure. */
+    static final double STANDARD_ATMOSPHERE = 101_325.0;
+
+    private CaseFiles() {
+    }
+
+    /**
+     * Reads a case file.
+     *
+     * @param file the file
+     * @return the case
+     * @throws InputException naming the field (or the file) and the reason
+     */
+    public static CoilCase read(Path file) {
+        String text;
+        try {
+            text = Files.readString(file, StandardCharsets.UTF_8);
+        } catch (NoSuchFileException e) {
+            throw new InputException(file.toString(), Msg.FILE_UNREADABLE, file, "no such file");
+        } catch (IOException e) {
+            throw new InputException(file.toString(), Msg.FILE_UNREADABLE, file, e.getMessage());
+        }
+        return parse(text, file.getFileName().toString());
+    }
+
+    /**
+     * Parses a case from JSON text.
+     *
+     * @param json   the text
+     * @param origin where it came from, for messages (e.g. the file name)
+     * @return the case
+     */
+    public static CoilCase parse(String json, String origin) {
+        return read(tree(json, origin));
+    }
+
+    static JsonNode tree(String json, String origin) {
+        try {
+            JsonNode root = MAPPER.readTree(json);
+            if (root == null || root.isMissingNode()) {
+                throw new InputException(origin, Msg.MALFORMED_FILE, "the file is empty");
+            }
+            return root;
+        } catch (JsonProcessingException e) {
+            String where = e.getLocation() == null ? ""
+                    : " (line " + e.getLocation().getLineNr() + ", column " + e.getLocation().getColumnNr() + ")";
+            throw new InputException(origin, Msg.MALFORMED_FILE, e.getOriginalMessage() + where);
+        }
+    }
+
+    /**
+     * Reads a case from a parsed JSON tree.
+     *
+     * @param root the case object
+     * @return the case
+     */
+    public static CoilCase read(JsonNode root) {
+        JsonFields top = new JsonFields(root, "");
+        top.onlyKeys(TOP);
+        int version = (int) top.number("version", VERSION);
+        if (version > VERSION) {
+            throw new InputException("version", Msg.NEWER_VERSION, version, VERSION);
+        }
+        if (version < 1) {
+            throw new InputException("version", Msg.NOT_POSITIVE, version);
+        }
+        return new CoilCase(coil(top.object("coil", true)), air(top.object("air", true)),
+                refrigerant(top.object("refrigerant", true)), fouling(top.object("fouling", false)));
+    }
+
+    /**
+     * Reads a coil object.
+     *
+     * @param c the {@code coil} fields
+     * @return the geometry
+     */
+    static CoilGeometry coil(JsonFields c) {
+        c.onlyKeys(COIL);
+        Materials lib = Materials.library();
+        Coating coating = c.has("coating") ? lib.coating(c.field("coating"), c.text("coating")) : null;
+        double coatingThickness = coating == null ? c.quantity("coatingThickness", Dimension.LENGTH, 0)
+                : c.quantity("coatingThickness", Dimension.LENGTH, coating.typicalThickness());
+        return c.build(() -> new CoilGeometry(c.quantity("tubeOuterDiameter", Dimension.LENGTH),
+                        c.quantity("tubeWall", Dimension.LENGTH),
+                        lib.tube(c.field("tubeMaterial"), c.text("tubeMaterial")),
+                        Arrangement.parse(c.field("arrangement"), c.text("arrangement", "staggered")),
+                        c.quantity("transversePitch", Dimension.LENGTH), c.quantity("rowPitch", Dimension.LENGTH),
+                        c.count("rows"), c.count("tubesPerRow"), c.quantity("finnedLength", Dimension.LENGTH),
+                        c.text("finType", "plain").strip().toLowerCase(java.util.Locale.ROOT),
+                        c.quantity("finPitch", Dimension.FIN_PITCH), c.quantity("finThickness", Dimension.LENGTH),
+                        lib.fin(c.field("finMaterial"), c.text("finMaterial")), c.has("circuits") ? c.count("circuits") : 1,
+                        coating, coatingThickness));
+    }
+
+    static AirInlet air(JsonFields a) {
+        a.onlyKeys(AIR);
+        return a.build(() -> new AirInlet(a.quantity("inletTemperature", Dimension.TEMPERATURE),
+                        a.quantity("faceVelocity", Dimension.VELOCITY, 0), a.quantity("volumeFlow", Dimension.VOLUME_FLOW, 0),
+                        a.quantity("pressure", Dimension.PRESSURE, STANDARD_ATMOSPHERE), a.number("relativeHumidity", 0)));
+    }
+
+    static RefrigerantSide refrigerant(JsonFields r) {
+        r.onlyKeys(REFRIGERANT);
+        return r.build(() -> new RefrigerantSide(r.text("fluid"), Duty.parse(r.field("duty"), r.text("duty")),
+                        r.quantity("saturationTemperature", Dimension.TEMPERATURE),
+                        r.quantity("insideCoefficient", Dimension.HEAT_TRANSFER_COEFFICIENT)));
+    }
+
+    static FoulingResistances fouling(JsonFields f) {
+        if (!f.present()) {
+            return FoulingResistances.NONE;
+        }
+        f.onlyKeys(FOULING);
+        return f.build(() -> new FoulingResistances(f.quantity("airSide", Dimension.FOULING_RESISTANCE, 0),
+                        f.quantity("inside", Dimension.FOULING_RESISTANCE, 0),
+                        f.quantity("contact", Dimension.FOULING_RESISTANCE, 0)));
+    }
+}
