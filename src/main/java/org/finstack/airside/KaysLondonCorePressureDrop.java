@@ -26,7 +26,7 @@ public final class KaysLondonCorePressureDrop {
     /** The equation's source. */
     public static final Citation SOURCE = Citation.of("Kays & London 1984",
             "Kays, W.M., London, A.L., 1984, Compact Heat Exchangers, 3rd ed., McGraw-Hill, New York,"
-                    + " core pressure-drop equation (Eq. 2-26a as cited in the project brief)");
+                    + " chapter 2, core pressure-drop equation with entrance and exit losses");
 
     /** Source of the choice Kc = Ke = 0 for the Wang et al. friction factors. */
     public static final Citation END_LOSS_SOURCE = Citation.of("Wang & Chi 2000",

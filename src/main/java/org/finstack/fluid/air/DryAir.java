@@ -10,7 +10,7 @@ import org.finstack.core.OutOfRangeException;
  *
  * <ul>
  *   <li><b>Density</b>: ideal gas, {@code rho = p M / (R T)}, with the molar mass of dry air
- *       {@code M = 28.9647 g/mol} and the CODATA 2018 molar gas constant
+ *       {@code M = 28.9644 g/mol} (U.S. Standard Atmosphere 1976, sea-level mean molar mass) and the CODATA 2018 molar gas constant
  *       {@code R = 8.314462618 J/(mol K)}. Error against the real gas: the compressibility factor
  *       of air at 101.325 kPa is about 0.998 at 200 K, 0.9997 at 300 K and 1.0001 at 400 K
  *       (second virial coefficient of air about -35, -7.5 and +3.5 cm3/mol, from memory), so
@@ -65,8 +65,8 @@ public final class DryAir {
     /** Highest pressure accepted [Pa]. */
     public static final double P_MAX = 200_000.0;
 
-    /** Molar mass of dry air used for the density [kg/mol] (value set by the project brief). */
-    public static final double MOLAR_MASS = 28.9647e-3;
+    /** Molar mass of dry air [kg/mol]: U.S. Standard Atmosphere, 1976 (NOAA/NASA/USAF), sea-level value 28.9644 kg/kmol. */
+    public static final double MOLAR_MASS = 28.9644e-3;
     /** Molar gas constant [J/(mol K)] (CODATA 2018, exact). */
     public static final double R = 8.314462618;
 
