@@ -41,6 +41,11 @@ final class Output {
         return root;
     }
 
+    static String pretty(ObjectNode root) throws com.fasterxml.jackson.core.JsonProcessingException {
+        return new com.fasterxml.jackson.databind.ObjectMapper()
+                .enable(com.fasterxml.jackson.databind.SerializationFeature.INDENT_OUTPUT).writeValueAsString(root);
+    }
+
     /** A two-column table of labelled values. */
     static final class Table {
         private final PrintWriter out;
@@ -62,6 +67,10 @@ final class Output {
 
         void plain(String label, double v) {
             out.printf(Locale.ROOT, "  %-26s %s%n", label, Numbers.brief(v));
+        }
+
+        void percent(String label, double fraction) {
+            out.printf(Locale.ROOT, "  %-26s %s %%%n", label, Numbers.brief(100 * fraction));
         }
 
         void share(String label, double share) {

@@ -1,7 +1,5 @@
 package org.finstack.cli;
 
-import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.databind.SerializationFeature;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.PrintWriter;
 import java.nio.file.Path;
@@ -49,7 +47,7 @@ final class RateCommand implements Callable<Integer> {
         if (json) {
             ObjectNode root = Output.envelope("rate", caseFile);
             root.set("results", RatingJson.results(r));
-            out.println(new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT).writeValueAsString(root));
+            out.println(Output.pretty(root));
         } else {
             table(out, c, r, system);
         }

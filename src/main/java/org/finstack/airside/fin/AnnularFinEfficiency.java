@@ -56,7 +56,8 @@ public final class AnnularFinEfficiency implements FinEfficiencyMethod {
                     + "Table 3.5 (annular fin of rectangular profile)");
 
     /** Validity: Bi = h (t/2)/k up to 0.1 (one-dimensional conduction; common practice). */
-    public static final Validity VALIDITY = Validity.of(Limit.of("Bi", 0, 0.1));
+    public static final Validity VALIDITY = Validity.assessed("for one-dimensional fin conduction (common practice)",
+            Limit.of("Bi", 0, 0.1));
 
     /** The single instance (stateless), as the equivalent-radius plate-fin method. */
     public static final AnnularFinEfficiency INSTANCE = new AnnularFinEfficiency();
