@@ -127,7 +127,9 @@ def main():
                     continue
                 ps = CP.PropsSI("P", "T", t, "Q", 0, cpname)
                 states += [(t, min(ps * 3 + 1e6, 0.9 * CP.PropsSI("pmax", cpname))), (t, ps * 0.5)]
-            states += [(tc + 20, pc * 0.5), (tc + 20, pc * 1.5), (tc + 60, pc * 2)]
+            tmax = CP.PropsSI("Tmax", cpname)
+            t1, t2 = min(tc + 20, tmax - 2), min(tc + 60, tmax - 1)
+            states += [(t1, pc * 0.5), (t1, pc * 1.5), (t2, pc * 2)]
             for t, p in states:
                 row = [t, p] + [prop(o, "T", t, "P", p)
                                 for o in ("Dmass", "Hmass", "Smass", "Cpmass", "Cvmass", "speed_of_sound")]

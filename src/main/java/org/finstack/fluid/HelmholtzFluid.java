@@ -282,7 +282,7 @@ public final class HelmholtzFluid implements Fluid {
         for (int it = 0; it < MAX_ITER; it++) {
             FluidState s = singleTP(t, p, null);
             f = s.enthalpy() - h;
-            if (Math.abs(f) <= 1e-9 * Math.max(Math.abs(h), 1e4)) {
+            if (Math.abs(f) <= 1e-12 * Math.max(Math.abs(h), 1e4)) {
                 return s;
             }
             if (f > 0) {
@@ -293,6 +293,9 @@ public final class HelmholtzFluid implements Fluid {
                 hLo = s.enthalpy();
             }
             double tn = t - f / s.cp();
+            if (Math.abs(tn - t) < 1e-13 * t) {
+                return s;
+            }
             if (!(tn > tLo && tn < tHi)) {
                 tn = tLo + (h - hLo) / (hHi - hLo) * (tHi - tLo);
                 if (!(tn > tLo && tn < tHi)) {
@@ -339,11 +342,11 @@ public final class HelmholtzFluid implements Fluid {
                 lo = x;
             }
             double xn = x - f / ps[1];
+            if (ps[1] > 0 && (Math.abs(xn - x) <= 1e-13 * x || Math.abs(f) <= 1e-13 * pressure)) {
+                return xn;
+            }
             if (!(ps[1] > 0) || !(xn > lo && xn < hi)) {
                 xn = 0.5 * (lo + hi);
-            }
-            if (Math.abs(xn - x) <= 1e-13 * x || Math.abs(f) <= 1e-13 * pressure) {
-                return xn;
             }
             x = xn;
         }
