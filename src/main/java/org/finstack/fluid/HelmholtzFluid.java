@@ -44,6 +44,8 @@ public final class HelmholtzFluid implements Fluid {
     static final double IIR_ENTROPY = 1_000;
 
     private static final int MAX_ITER = 100;
+    /** Relative distance below Tc from which saturation starts from scaled values, not ancillaries. */
+    private static final double NEAR_CRITICAL = 0.01;
 
     private final String name;
     private final HelmholtzEos eos;
@@ -365,8 +367,26 @@ public final class HelmholtzFluid implements Fluid {
         double rr = e.reducingDensity();
         double tau = e.reducingTemperature() / t;
         double m = e.molarMass();
-        double dl = (start != null ? start[0] : liquidDensity.at(t) * m) / rr;
-        double dv = (start != null ? start[1] : vapourDensity.at(t) * m) / rr;
+        double dl;
+        double dv;
+        double tNear = tc * (1 - NEAR_CRITICAL);
+        if (start != null) {
+            dl = start[0] / rr;
+            dv = start[1] / rr;
+        } else if (t > tNear) {
+            // close to Tc the ancillaries are too coarse to keep Newton off the trivial solution:
+            // start from the solution at tNear, scaled with the critical exponent of the width
+            // (beta about 0.35) and a linear rectilinear diameter
+            double[] ref = saturationDensities(e, tNear, null);
+            double x = (1 - t / tc) / NEAR_CRITICAL;
+            double half = 0.5 * (ref[0] - ref[1]) * Math.pow(x, 0.35);
+            double mid = rhoc + (0.5 * (ref[0] + ref[1]) - rhoc) * x;
+            dl = (mid + half) / rr;
+            dv = (mid - half) / rr;
+        } else {
+            dl = liquidDensity.at(t) * m / rr;
+            dv = vapourDensity.at(t) * m / rr;
+        }
         if (!(dl > dv) || !(dv > 0)) {
             dl = Math.max(dl, rhoc / rr * 1.01);
             dv = Math.min(Math.max(dv, 1e-12), rhoc / rr * 0.99);
@@ -385,7 +405,7 @@ public final class HelmholtzFluid implements Fluid {
             double f2 = kv - kl;
             err = Math.abs(f1) / Math.max(Math.abs(jv), 1e-300) + Math.abs(f2);
             if (err < 1e-12) {
-                return new double[] {dl * rr, dv * rr};
+                return accepted(t, dl * rr, dv * rr, err);
             }
             double stepL = (f1 - f2 * dv) / (jld * (1 - dv / dl));
             double stepV = (f2 * dl - f1) / (jvd * (1 - dl / dv));
@@ -408,12 +428,21 @@ public final class HelmholtzFluid implements Fluid {
             // near the triple point p' is a small difference of large terms: accept when the steps
             // have shrunk to the rounding level
             if (Math.abs(f2) < 1e-10 && Math.abs(ndl - dl) <= 1e-13 * dl && Math.abs(ndv - dv) <= 1e-9 * dv) {
-                return new double[] {ndl * rr, ndv * rr};
+                return accepted(t, ndl * rr, ndv * rr, err);
             }
             dl = ndl;
             dv = ndv;
         }
         throw new ConvergenceException(name + " saturation at T = " + Numbers.brief(t) + " K", MAX_ITER, err);
+    }
+
+    /** Rejects the trivial solution (both densities equal) that Newton can fall into near Tc. */
+    private double[] accepted(double t, double rhoL, double rhoV, double err) {
+        if (!(rhoL > rhoc && rhoV < rhoc)) {
+            throw new ConvergenceException(name + " saturation at T = " + Numbers.brief(t)
+                    + " K (converged to equal densities)", MAX_ITER, err);
+        }
+        return new double[] {rhoL, rhoV};
     }
 
     /** Inverts the ancillary vapour pressure by bisection (start value only). */
