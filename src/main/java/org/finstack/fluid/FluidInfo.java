@@ -14,7 +14,9 @@ import org.finstack.core.Citation;
  * @param gwp100               global warming potential, 100-year horizon [-]
  * @param gwpBasis             which assessment the GWP comes from (IPCC AR4, as in Regulation
  *                             (EU) No 517/2014)
- * @param criticalTemperature  Tc [K]
+ * @param criticalTemperature  Tc [K]: the critical point as given with the equation's data (for
+ *                             R134a, R1234ze(E) and R717 the equation's own critical point, which
+ *                             differs from the paper's stated values by less than 0.03 K)
  * @param criticalPressure     pc [Pa]
  * @param criticalDensity      rho_c [kg/m3]
  * @param molarMass            M [kg/mol]
@@ -39,13 +41,4 @@ public record FluidInfo(String name, List<String> aliases, String chemicalName, 
         Objects.requireNonNull(equationOfState, "equationOfState");
     }
 
-    /** @return the valid temperature range, for messages */
-    public String temperatureRange() {
-        return minTemperature + " K to " + maxTemperature + " K";
-    }
-
-    /** @return the valid pressure range, for messages */
-    public String pressureRange() {
-        return "above 0 Pa up to " + maxPressure + " Pa";
-    }
 }
