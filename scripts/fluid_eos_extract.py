@@ -112,6 +112,15 @@ R1234YF_2011 = {
 }
 
 
+# Molar gas constant used by the paper where the CoolProp copy carries another value; confirmed by
+# reproducing the papers' check tables (Thol & Lemmon 2016 Table 3, Gao et al. 2020 Table 7) to
+# all printed digits with these values and not with CoolProp's.
+GAS_CONSTANT = {"R1234ze(E)": 8.3144598, "R717": 8.314462618}
+
+# Validity range stated by the paper where the CoolProp copy extends it.
+MAX_TEMPERATURE = {"R744": 1100.0}
+
+
 def cp_json(name):
     j = json.loads(CP.get_fluid_param_string(name, "JSON"))
     return j[0] if isinstance(j, list) else j
@@ -220,11 +229,12 @@ def build(entry):
         red = e["STATES"]["reducing"]
         crit = j["STATES"]["critical"]
         doc.update({
-            "molarMass": e["molar_mass"], "gasConstant": e["gas_constant"],
+            "molarMass": e["molar_mass"], "gasConstant": GAS_CONSTANT.get(name, e["gas_constant"]),
             "reducing": {"temperature": red["T"], "molarDensity": red["rhomolar"]},
             "critical": {"temperature": crit["T"], "pressure": crit["p"], "molarDensity": crit["rhomolar"]},
             "tripleTemperature": e["Ttriple"],
-            "range": {"minTemperature": e["Ttriple"], "maxTemperature": e["T_max"], "maxPressure": e["p_max"]},
+            "range": {"minTemperature": e["Ttriple"], "maxTemperature": MAX_TEMPERATURE.get(name, e["T_max"]),
+                      "maxPressure": e["p_max"]},
             "ideal": ideal(e["alpha0"], red["T"]),
             "residual": residual(e["alphar"]),
         })

@@ -105,7 +105,7 @@ def main():
         with open(os.path.join(OUT, f"fluid-{stem(name)}-saturation.csv"), "w") as f:
             header(f, name, "saturation states at -50..+60 degC every 10 K (within the triple point and Tc - 1 K)",
                    "K, Pa, kg/m3, kg/m3, J/kg, J/kg, J/(kg K), J/(kg K), J/(kg K), J/(kg K), m/s, m/s",
-                   "relative 1e-6 (p, rho, h, s), 1e-5 (cp, w)")
+                   "relative 1e-6 (p, rho, h, s; plus the gas-constant difference for R1234ze(E) and R717, see FluidReferenceDataTest), 1e-5 (cp, w)")
             f.write("T,p,rhoL,rhoV,hL,hV,sL,sV,cpL,cpV,wL,wV\n")
             for tc_deg in range(-50, 61, 10):
                 t = 273.15 + tc_deg
@@ -118,7 +118,7 @@ def main():
         with open(os.path.join(OUT, f"fluid-{stem(name)}-states.csv"), "w") as f:
             header(f, name, "single-phase states: subcooled liquid, superheated vapour, supercritical",
                    "K, Pa, kg/m3, J/kg, J/(kg K), J/(kg K), J/(kg K), m/s",
-                   "relative 1e-6 (rho, h, s), 1e-5 (cp, cv, w)")
+                   "relative 1e-6 (rho, h, s; plus the gas-constant difference for R1234ze(E) and R717), 1e-5 (cp, cv, w)")
             f.write("T,p,rho,h,s,cp,cv,w\n")
             states = []
             for tc_deg in (-40, 0, 40):

@@ -2,8 +2,11 @@ package org.finstack.fluid;
 
 import static org.finstack.testing.Reference.assertRelative;
 
+import static org.junit.jupiter.api.Assertions.assertEquals;
+
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import org.finstack.testing.Reference;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
@@ -17,6 +20,22 @@ import org.junit.jupiter.params.provider.MethodSource;
  * cp and speed of sound of both phases; single-phase liquid, vapour and supercritical states.
  */
 class FluidReferenceDataTest {
+
+    /**
+     * Relative difference of the molar gas constant between Finstack's data file (the paper's
+     * value) and CoolProp 8.0.0's copy: R1234ze(E) 8.3144598 vs 8.314472, R717 8.314462618 vs
+     * 8.3144598. Pressure at given density, enthalpy and entropy scale with it.
+     */
+    private static final Map<String, Double> GAS_CONSTANT_DIFFERENCE = Map.of("R1234ze(E)", 1.5e-6, "R717", 3.4e-7);
+
+    private static double tol(String fluid, double base) {
+        return base + GAS_CONSTANT_DIFFERENCE.getOrDefault(fluid, 0.0);
+    }
+
+    /** Enthalpy and entropy pass through zero: compare relative to at least 200 kJ/kg, 1 kJ/(kg K). */
+    private static void close(double expected, double actual, double scaleFloor, double tol, String what) {
+        assertEquals(expected, actual, tol * Math.max(Math.abs(expected), scaleFloor), what);
+    }
 
     static List<String> fluids() {
         return Fluids.names();
@@ -38,14 +57,15 @@ class FluidReferenceDataTest {
             String at = name + " saturation at " + t + " K (CoolProp 8.0.0)";
             // CoolProp evaluates saturation with its superancillary approximations (agreement
             // with the full phase equilibrium about 1e-8 to 1e-7); tolerance 1e-6
-            assertRelative(r[1], s.vapour().pressure(), 1e-6, at + ": p");
+            double t6 = tol(name, 1e-6);
+            assertRelative(r[1], s.vapour().pressure(), t6, at + ": p");
             assertRelative(r[2], s.liquid().density(), 1e-6, at + ": rho'");
             assertRelative(r[3], s.vapour().density(), 1e-6, at + ": rho''");
-            assertRelative(r[4], s.liquid().enthalpy(), 1e-6, at + ": h'");
-            assertRelative(r[5], s.vapour().enthalpy(), 1e-6, at + ": h''");
-            assertRelative(r[5] - r[4], s.latentHeat(), 2e-6, at + ": latent heat");
-            assertRelative(r[6], s.liquid().entropy(), 1e-6, at + ": s'");
-            assertRelative(r[7], s.vapour().entropy(), 1e-6, at + ": s''");
+            close(r[4], s.liquid().enthalpy(), 2e5, t6, at + ": h'");
+            close(r[5], s.vapour().enthalpy(), 2e5, t6, at + ": h''");
+            assertRelative(r[5] - r[4], s.latentHeat(), tol(name, 2e-6), at + ": latent heat");
+            close(r[6], s.liquid().entropy(), 1e3, t6, at + ": s'");
+            close(r[7], s.vapour().entropy(), 1e3, t6, at + ": s''");
             assertRelative(r[8], s.liquid().cp(), 1e-5, at + ": cp'");
             assertRelative(r[9], s.vapour().cp(), 1e-5, at + ": cp''");
             assertRelative(r[10], s.liquid().speedOfSound(), 1e-5, at + ": w'");
@@ -60,9 +80,13 @@ class FluidReferenceDataTest {
         for (double[] r : Reference.csv(file(name, "states"))) {
             FluidState s = f.at(InputPair.TP, r[0], r[1]);
             String at = name + " at T = " + r[0] + " K, p = " + r[1] + " Pa (CoolProp 8.0.0)";
-            assertRelative(r[2], s.density(), 1e-6, at + ": rho");
-            assertRelative(r[3], s.enthalpy(), 1e-6, at + ": h");
-            assertRelative(r[4], s.entropy(), 1e-6, at + ": s");
+            double t6 = tol(name, 1e-6);
+            // at given (T, p) the density error from the gas constant is amplified by the
+            // compressibility, p / (rho (dp/drho)_T), about 2 at the near-critical states here
+            assertRelative(r[2], s.density(), tol(name, 1e-6) + 2 * GAS_CONSTANT_DIFFERENCE.getOrDefault(name, 0.0),
+                    at + ": rho");
+            close(r[3], s.enthalpy(), 2e5, t6, at + ": h");
+            close(r[4], s.entropy(), 1e3, t6, at + ": s");
             assertRelative(r[5], s.cp(), 1e-5, at + ": cp");
             assertRelative(r[6], s.cv(), 1e-5, at + ": cv");
             assertRelative(r[7], s.speedOfSound(), 1e-5, at + ": w");
