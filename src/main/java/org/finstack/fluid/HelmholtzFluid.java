@@ -402,7 +402,7 @@ public final class HelmholtzFluid implements Fluid {
         } else if (t > tNear) {
             // close to Tc the ancillaries are too coarse to keep Newton off the trivial solution:
             // start from the solution at tNear, scaled with the critical exponent of the width
-            // (beta about 0.35) and a linear rectilinear diameter
+            // (beta about 0.35, common practice) and a linear rectilinear diameter
             double[] ref = saturationDensities(e, tNear, null);
             double x = (1 - t / tc) / NEAR_CRITICAL;
             double half = 0.5 * (ref[0] - ref[1]) * Math.pow(x, 0.35);
