@@ -1,0 +1,92 @@
+package org.finstack.fluid;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.concurrent.ConcurrentHashMap;
+import org.finstack.core.InputException;
+import org.finstack.core.Msg;
+
+/**
+ * The refrigerants Finstack knows, by trade name. Names are matched without regard to case,
+ * hyphens, spaces and the "R" prefix's hyphen: {@code "R134a"}, {@code "R-134a"},
+ * {@code "r134a"}, {@code "R-1234ze(E)"}, {@code "HFC-134a"} all work. Each fluid's data file is
+ * parsed once, on first use, and the immutable result shared (thread-safe).
+ */
+public final class Fluids {
+
+    /** Canonical names, in the order {@link #all()} returns them, with their data files. */
+    private static final Map<String, String> FILES = files();
+
+    private static final Map<String, Fluid> LOADED = new ConcurrentHashMap<>();
+
+    private Fluids() {
+    }
+
+    private static Map<String, String> files() {
+        Map<String, String> m = new LinkedHashMap<>();
+        for (String n : List.of("R134a", "R32", "R125", "R290", "R600a", "R717", "R1234yf", "R1234ze(E)", "R22",
+                "R143a", "R1270", "R744")) {
+            m.put(n, "/org/finstack/fluid/" + n.toLowerCase(Locale.ROOT).replace("(", "").replace(")", "") + ".json");
+        }
+        return java.util.Collections.unmodifiableMap(m);
+    }
+
+    /** Aliases (normalised) to canonical names; built from the names and well-known trade aliases. */
+    private static final Map<String, String> ALIASES = aliases();
+
+    private static Map<String, String> aliases() {
+        Map<String, String> m = new ConcurrentHashMap<>();
+        for (String n : FILES.keySet()) {
+            m.put(normalise(n), n);
+        }
+        String[][] extra = {
+            {"HFC134a", "R134a"}, {"HFC32", "R32"}, {"HFC125", "R125"}, {"propane", "R290"}, {"HC290", "R290"},
+            {"isobutane", "R600a"}, {"HC600a", "R600a"}, {"ammonia", "R717"}, {"NH3", "R717"},
+            {"HFO1234yf", "R1234yf"}, {"HFO1234ze(E)", "R1234ze(E)"}, {"HCFC22", "R22"}, {"HFC143a", "R143a"},
+            {"propylene", "R1270"}, {"propene", "R1270"}, {"HC1270", "R1270"}, {"CO2", "R744"},
+            {"carbondioxide", "R744"},
+        };
+        for (String[] e : extra) {
+            m.put(normalise(e[0]), e[1]);
+        }
+        return Map.copyOf(m);
+    }
+
+    /**
+     * @param name a trade name or alias
+     * @return the key it is looked up under: lower case, without hyphens, spaces and underscores
+     */
+    static String normalise(String name) {
+        return name.strip().toLowerCase(Locale.ROOT).replace("-", "").replace(" ", "").replace("_", "");
+    }
+
+    /**
+     * @param name trade name, e.g. {@code "R-134a"}
+     * @return the fluid
+     * @throws InputException ({@code refrigerant.fluid}, {@link Msg#UNKNOWN_NAME}) if unknown
+     */
+    public static Fluid byName(String name) {
+        String canonical = name == null ? null : ALIASES.get(normalise(name));
+        if (canonical == null) {
+            throw new InputException("refrigerant.fluid", Msg.UNKNOWN_NAME, name, String.join(", ", names()));
+        }
+        return LOADED.computeIfAbsent(canonical, n -> FluidFile.load(FILES.get(n)));
+    }
+
+    /** @return the canonical names of all known fluids */
+    public static List<String> names() {
+        return List.copyOf(FILES.keySet());
+    }
+
+    /** @return every known fluid (loading those not yet loaded) */
+    public static List<Fluid> all() {
+        List<Fluid> out = new ArrayList<>();
+        for (String n : FILES.keySet()) {
+            out.add(byName(n));
+        }
+        return List.copyOf(out);
+    }
+}
