@@ -36,4 +36,13 @@ public interface Fluid {
      * @return the state
      */
     FluidState at(InputPair pair, double a, double b);
+
+    /**
+     * @return the fluid's transport properties (viscosity, conductivity, surface tension)
+     * @throws org.finstack.core.FinstackException if none are available for this fluid
+     */
+    default TransportProperties transport() {
+        throw new org.finstack.core.FinstackException(org.finstack.core.Msg.IMPOSSIBLE,
+                "no transport properties are available for " + name());
+    }
 }
