@@ -159,7 +159,7 @@ public final class IsothermalCoilModel {
 
     private static AirSideSurface surface(CoilGeometry g, DerivedGeometry d) {
         CoilGeometry.FinPattern p = g.finPattern();
-        AirSideSurface.Pattern pattern = switch (g.finType()) {
+        AirSideSurface.Pattern pattern = switch (g.finType().strip().toLowerCase(Locale.ROOT)) {
             case CoilGeometry.WAVY -> new AirSideSurface.Pattern.Wavy(p.waveHeight(), p.waveLength());
             case CoilGeometry.LOUVERED -> new AirSideSurface.Pattern.Louvered(p.louverPitch(), p.louverHeight());
             default -> AirSideSurface.Pattern.Plain.INSTANCE;

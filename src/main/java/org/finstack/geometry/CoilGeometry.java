@@ -274,8 +274,8 @@ public record CoilGeometry(double tubeOuterDiameter, double tubeWall, Material t
          * @param rowPitch the coil's row pitch [m]; a wave or louver pitch must fit inside it
          */
         void checkFor(String finType, double rowPitch) {
-            boolean wavy = WAVY.equals(finType);
-            boolean louvered = LOUVERED.equals(finType);
+            boolean wavy = WAVY.equalsIgnoreCase(finType.strip());
+            boolean louvered = LOUVERED.equalsIgnoreCase(finType.strip());
             required(wavy, "waveHeight", waveHeight, finType);
             required(wavy, "waveLength", waveLength, finType);
             required(louvered, "louverPitch", louverPitch, finType);

@@ -83,6 +83,11 @@ class FinPatternRatingTest {
                 .isEqualTo("louverPitch");
         assertThat(refused(() -> plain.withFinPattern("wavy", FinPattern.wavy(1.2e-3, 30e-3))).field())
                 .isEqualTo("waveLength");
+        // the fin type is matched in any case, as the correlation registry does
+        Rating upper = MODEL.rate(IsothermalCoilModelTest.condenser(
+                plain.withFinPattern(" Louvered", FinPattern.louvered(2.4e-3, 1.0e-3))));
+        assertRelative(MODEL.rate(IsothermalCoilModelTest.condenser(louvered())).capacity(), upper.capacity(), 1e-12,
+                "capacity with fin type written \" Louvered\"");
         // a plain coil needs nothing, and the pattern survives the with-methods
         assertThat(plain.finPattern()).isEqualTo(FinPattern.NONE);
         assertThat(louvered().withRows(4).finPattern()).isEqualTo(FinPattern.louvered(2.4e-3, 1.0e-3));
