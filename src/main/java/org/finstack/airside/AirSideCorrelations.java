@@ -13,8 +13,10 @@ import org.finstack.core.Msg;
 /**
  * The air-side correlations Finstack knows, keyed by their {@code ID} constants. Immutable.
  *
- * <p>Fin types: "plain", "wavy", "louvered". At present only the plain fin has a correlation
- * ({@link WangChiChang2000PlainFin}); asking for the others returns an empty list.
+ * <p>Fin types: "plain", "wavy", "louvered". The plain fin has {@link WangChiChang2000PlainFin}
+ * and the louvered fin {@link WangLeeChangLin1999LouveredFin}; the wavy fin has no correlation
+ * yet (the published coefficients could not be confirmed), so asking for it returns an empty
+ * list and {@link #standard} refuses it.
  */
 public final class AirSideCorrelations {
 
@@ -25,7 +27,8 @@ public final class AirSideCorrelations {
 
     static {
         Map<String, AirSideCorrelation> m = new LinkedHashMap<>();
-        for (AirSideCorrelation c : List.<AirSideCorrelation>of(WangChiChang2000PlainFin.INSTANCE)) {
+        for (AirSideCorrelation c : List.<AirSideCorrelation>of(WangChiChang2000PlainFin.INSTANCE,
+                WangLeeChangLin1999LouveredFin.INSTANCE)) {
             if (m.put(c.id(), c) != null) {
                 throw new IllegalStateException("duplicate correlation id " + c.id());
             }

@@ -36,6 +36,10 @@ public record AirSideSurface(double collarDiameter, double transversePitch, doub
         Check.positive("finThickness", finThickness);
         Check.atLeastOne("rows", rows);
         Check.positive("hydraulicDiameter", hydraulicDiameter);
+        if (2 * finThickness >= collarDiameter) {
+            // the collar is the tube plus two fin thicknesses, so the tube would have no diameter
+            throw new InputException("finThickness", Msg.NOT_BELOW, finThickness, collarDiameter / 2);
+        }
         if (finPitch <= finThickness) {
             throw new InputException("finPitch", Msg.PITCH_NOT_ABOVE_THICKNESS, finPitch, finThickness);
         }
@@ -69,6 +73,31 @@ public record AirSideSurface(double collarDiameter, double transversePitch, doub
             double finPitch, double finThickness, int rows, double hydraulicDiameter, boolean staggered) {
         return new AirSideSurface(collarDiameter, transversePitch, rowPitch, finPitch, finThickness, rows,
                 hydraulicDiameter, staggered, Pattern.Plain.INSTANCE);
+    }
+
+    /**
+     * Ratio of the total air-side area to the bare-tube outside area, Ao/At, of the continuous
+     * plate-fin unit cell (one tube, one fin pitch):
+     * <pre>
+     *   Ao = 2 (Pt Pl - pi Dc^2 / 4) + pi Dc (Fp - t)     fin both sides, plus collar between fins
+     *   At = pi Do Fp,  Do = Dc - 2 t                       tube outside surface without fins
+     * </pre>
+     * The fins' leading and trailing edges are not counted, as in
+     * {@link org.finstack.geometry.DerivedGeometry}, so the value equals that record's
+     * {@code airSideArea / tubeOuterArea} for the same coil. The louvers of a louvered fin are
+     * slit and twisted out of the plate without adding area; a wavy fin's extra area from its
+     * corrugation is not included. At follows the bare-tube definition of the Wang et al.
+     * louvered-fin friction correlation as transcribed by Jacobi et al. (2001) (see
+     * {@link WangLeeChangLin1999LouveredFin}).
+     *
+     * @return Ao/At [-], above 1
+     */
+    public double bareTubeAreaRatio() {
+        double dc = collarDiameter;
+        double tubeOuter = dc - 2 * finThickness;
+        double finSides = 2 * (transversePitch * rowPitch - Math.PI * dc * dc / 4);
+        double collar = Math.PI * dc * (finPitch - finThickness);
+        return (finSides + collar) / (Math.PI * tubeOuter * finPitch);
     }
 
     /** @return the fin-pattern name: "plain", "wavy" or "louvered" */

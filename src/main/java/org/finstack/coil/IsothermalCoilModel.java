@@ -124,7 +124,12 @@ public final class IsothermalCoilModel {
         Rating.AirProperties props = new Rating.AirProperties(tMean, DryAir.density(tMean, p), DryAir.cp(tMean),
                 DryAir.viscosity(tMean), DryAir.conductivity(tMean), DryAir.prandtl(tMean));
         double reynolds = gMax * d.collarDiameter() / props.viscosity();
-        JF jf = correlation.evaluate(surface, reynolds, w);
+        JF jf;
+        try {
+            jf = correlation.evaluate(surface, reynolds, w);
+        } catch (InputException e) {
+            throw caseField(e);
+        }
         double h = ColburnFactor.heatTransferCoefficient(jf.j(), gMax, props.cp(), props.prandtl());
         double etaFin = finEfficiency.efficiency(cell, h, g.finMaterial().conductivity(), w);
         double etaO = SurfaceEffectiveness.of(etaFin, d.finArea(), d.airSideArea());
@@ -143,9 +148,24 @@ public final class IsothermalCoilModel {
         return new State(props, reynolds, jf, h, etaFin, etaO, r, capacityRate, ntu, eps);
     }
 
+    /** Names a surface field the way the case file does, where there is such a key. */
+    private static InputException caseField(InputException e) {
+        return switch (e.field()) {
+            case "rows" -> e.under("coil");
+            case "pattern" -> new InputException("coil.finType", e.msg(), e.args());
+            default -> e;
+        };
+    }
+
     private static AirSideSurface surface(CoilGeometry g, DerivedGeometry d) {
-        return AirSideSurface.plain(d.collarDiameter(), g.transversePitch(), g.rowPitch(), g.finPitch(),
-                g.finThickness(), g.rows(), d.hydraulicDiameter(), g.arrangement() == Arrangement.STAGGERED);
+        CoilGeometry.FinPattern p = g.finPattern();
+        AirSideSurface.Pattern pattern = switch (g.finType().strip().toLowerCase(Locale.ROOT)) {
+            case CoilGeometry.WAVY -> new AirSideSurface.Pattern.Wavy(p.waveHeight(), p.waveLength());
+            case CoilGeometry.LOUVERED -> new AirSideSurface.Pattern.Louvered(p.louverPitch(), p.louverHeight());
+            default -> AirSideSurface.Pattern.Plain.INSTANCE;
+        };
+        return new AirSideSurface(d.collarDiameter(), g.transversePitch(), g.rowPitch(), g.finPitch(),
+                g.finThickness(), g.rows(), d.hydraulicDiameter(), g.arrangement() == Arrangement.STAGGERED, pattern);
     }
 
     /**

@@ -31,11 +31,48 @@ import org.finstack.material.Material;
  * @param circuits          number of refrigerant circuits
  * @param coating           coating over the air-side surface, or {@code null} for none
  * @param coatingThickness  coating film thickness [m] (zero without a coating)
+ * @param finPattern        the fin-pattern parameters a wavy or louvered fin needs
+ *                          ({@link FinPattern#NONE} for a plain fin; {@code null} is taken as
+ *                          {@code NONE})
  */
 public record CoilGeometry(double tubeOuterDiameter, double tubeWall, Material tubeMaterial,
         Arrangement arrangement, double transversePitch, double rowPitch, int rows, int tubesPerRow,
         double finnedLength, String finType, double finPitch, double finThickness,
-        Material finMaterial, int circuits, Coating coating, double coatingThickness) {
+        Material finMaterial, int circuits, Coating coating, double coatingThickness, FinPattern finPattern) {
+
+    /** Fin type whose fins carry a herringbone wave ({@link FinPattern#waveHeight}, {@link FinPattern#waveLength}). */
+    public static final String WAVY = "wavy";
+    /** Fin type whose fins carry louvers ({@link FinPattern#louverPitch}, {@link FinPattern#louverHeight}). */
+    public static final String LOUVERED = "louvered";
+
+    /**
+     * A coil without fin-pattern parameters (plain fins, or a fin type that needs none).
+     *
+     * @param tubeOuterDiameter tube outside diameter [m]
+     * @param tubeWall          tube wall thickness [m]
+     * @param tubeMaterial      tube material
+     * @param arrangement       staggered or inline rows
+     * @param transversePitch   transverse tube pitch [m]
+     * @param rowPitch          row pitch [m]
+     * @param rows              rows in the air direction
+     * @param tubesPerRow       tubes in each row
+     * @param finnedLength      finned length of each tube [m]
+     * @param finType           fin type id
+     * @param finPitch          fin pitch [m]
+     * @param finThickness      fin thickness [m]
+     * @param finMaterial       fin material
+     * @param circuits          refrigerant circuits
+     * @param coating           coating, or {@code null}
+     * @param coatingThickness  coating thickness [m]
+     */
+    public CoilGeometry(double tubeOuterDiameter, double tubeWall, Material tubeMaterial,
+            Arrangement arrangement, double transversePitch, double rowPitch, int rows, int tubesPerRow,
+            double finnedLength, String finType, double finPitch, double finThickness,
+            Material finMaterial, int circuits, Coating coating, double coatingThickness) {
+        this(tubeOuterDiameter, tubeWall, tubeMaterial, arrangement, transversePitch, rowPitch, rows, tubesPerRow,
+                finnedLength, finType, finPitch, finThickness, finMaterial, circuits, coating, coatingThickness,
+                FinPattern.NONE);
+    }
 
     /** Validates the geometry; impossible coils are refused naming the field and the limit. */
     public CoilGeometry {
@@ -82,6 +119,10 @@ public record CoilGeometry(double tubeOuterDiameter, double tubeWall, Material t
                         (finPitch - finThickness) / 2);
             }
         }
+        if (finPattern == null) {
+            finPattern = FinPattern.NONE;
+        }
+        finPattern.checkFor(finType, rowPitch);
     }
 
     /** @return collar (fin-root) diameter: tube outer diameter plus two fin thicknesses [m] */
@@ -116,7 +157,7 @@ public record CoilGeometry(double tubeOuterDiameter, double tubeWall, Material t
     public CoilGeometry withFinPitch(double pitch) {
         return new CoilGeometry(tubeOuterDiameter, tubeWall, tubeMaterial, arrangement, transversePitch, rowPitch,
                 rows, tubesPerRow, finnedLength, finType, pitch, finThickness, finMaterial, circuits,
-                coating, coatingThickness);
+                coating, coatingThickness, finPattern);
     }
 
     /**
@@ -126,7 +167,7 @@ public record CoilGeometry(double tubeOuterDiameter, double tubeWall, Material t
     public CoilGeometry withRows(int n) {
         return new CoilGeometry(tubeOuterDiameter, tubeWall, tubeMaterial, arrangement, transversePitch, rowPitch,
                 n, tubesPerRow, finnedLength, finType, finPitch, finThickness, finMaterial, circuits,
-                coating, coatingThickness);
+                coating, coatingThickness, finPattern);
     }
 
     /**
@@ -136,7 +177,7 @@ public record CoilGeometry(double tubeOuterDiameter, double tubeWall, Material t
     public CoilGeometry withFinnedLength(double length) {
         return new CoilGeometry(tubeOuterDiameter, tubeWall, tubeMaterial, arrangement, transversePitch, rowPitch,
                 rows, tubesPerRow, length, finType, finPitch, finThickness, finMaterial, circuits,
-                coating, coatingThickness);
+                coating, coatingThickness, finPattern);
     }
 
     /**
@@ -146,7 +187,7 @@ public record CoilGeometry(double tubeOuterDiameter, double tubeWall, Material t
     public CoilGeometry withTubeWall(double wall) {
         return new CoilGeometry(tubeOuterDiameter, wall, tubeMaterial, arrangement, transversePitch, rowPitch,
                 rows, tubesPerRow, finnedLength, finType, finPitch, finThickness, finMaterial, circuits,
-                coating, coatingThickness);
+                coating, coatingThickness, finPattern);
     }
 
     /**
@@ -156,7 +197,18 @@ public record CoilGeometry(double tubeOuterDiameter, double tubeWall, Material t
     public CoilGeometry withTubeMaterial(Material material) {
         return new CoilGeometry(tubeOuterDiameter, tubeWall, material, arrangement, transversePitch, rowPitch,
                 rows, tubesPerRow, finnedLength, finType, finPitch, finThickness, finMaterial, circuits,
-                coating, coatingThickness);
+                coating, coatingThickness, finPattern);
+    }
+
+    /**
+     * @param type    new fin type id
+     * @param pattern its fin-pattern parameters ({@link FinPattern#NONE} for none)
+     * @return this coil with another fin type
+     */
+    public CoilGeometry withFinPattern(String type, FinPattern pattern) {
+        return new CoilGeometry(tubeOuterDiameter, tubeWall, tubeMaterial, arrangement, transversePitch, rowPitch,
+                rows, tubesPerRow, finnedLength, type, finPitch, finThickness, finMaterial, circuits,
+                coating, coatingThickness, pattern);
     }
 
     /**
@@ -166,6 +218,84 @@ public record CoilGeometry(double tubeOuterDiameter, double tubeWall, Material t
     public CoilGeometry withFinThickness(double thickness) {
         return new CoilGeometry(tubeOuterDiameter, tubeWall, tubeMaterial, arrangement, transversePitch, rowPitch,
                 rows, tubesPerRow, finnedLength, finType, finPitch, thickness, finMaterial, circuits,
-                coating, coatingThickness);
+                coating, coatingThickness, finPattern);
+    }
+
+    /**
+     * The fin-pattern parameters of an enhanced fin, as measured on the fin; zero means "not
+     * given". A wavy (herringbone) fin needs the wave height and length, a louvered fin the
+     * louver pitch and height; a plain fin needs none. Which fin type a coil has is
+     * {@link CoilGeometry#finType()}; its constructor refuses a missing parameter of that type,
+     * and a parameter that belongs to another type, naming the field.
+     *
+     * @param waveHeight   Pd, wave height of a herringbone wavy fin, peak to valley, not counting
+     *                     the fin thickness [m]
+     * @param waveLength   Xf, the projected length of <em>half</em> a wave, measured in the air-flow
+     *                     direction (the wave "length" of the Wang et al. wavy-fin papers, so that
+     *                     tan(theta) = Pd / Xf is the corrugation angle) [m]
+     * @param louverPitch  Lp, louver pitch, measured in the air-flow direction [m]
+     * @param louverHeight Lh, louver height, the height of the louver opening normal to the fin [m]
+     */
+    public record FinPattern(double waveHeight, double waveLength, double louverPitch, double louverHeight) {
+
+        /** No fin-pattern parameters. */
+        public static final FinPattern NONE = new FinPattern(0, 0, 0, 0);
+
+        /** Validates each value: finite and not negative (zero = not given). */
+        public FinPattern {
+            Check.nonNegative("waveHeight", waveHeight);
+            Check.nonNegative("waveLength", waveLength);
+            Check.nonNegative("louverPitch", louverPitch);
+            Check.nonNegative("louverHeight", louverHeight);
+        }
+
+        /**
+         * @param waveHeight Pd [m]
+         * @param waveLength Xf, projected half-wave length [m]
+         * @return a wavy-fin pattern
+         */
+        public static FinPattern wavy(double waveHeight, double waveLength) {
+            return new FinPattern(waveHeight, waveLength, 0, 0);
+        }
+
+        /**
+         * @param louverPitch  Lp [m]
+         * @param louverHeight Lh [m]
+         * @return a louvered-fin pattern
+         */
+        public static FinPattern louvered(double louverPitch, double louverHeight) {
+            return new FinPattern(0, 0, louverPitch, louverHeight);
+        }
+
+        /**
+         * Refuses a parameter the fin type needs but lacks, or has but does not use.
+         *
+         * @param finType  the coil's fin type
+         * @param rowPitch the coil's row pitch [m]; a wave or louver pitch must fit inside it
+         */
+        void checkFor(String finType, double rowPitch) {
+            boolean wavy = WAVY.equalsIgnoreCase(finType.strip());
+            boolean louvered = LOUVERED.equalsIgnoreCase(finType.strip());
+            required(wavy, "waveHeight", waveHeight, finType);
+            required(wavy, "waveLength", waveLength, finType);
+            required(louvered, "louverPitch", louverPitch, finType);
+            required(louvered, "louverHeight", louverHeight, finType);
+            if (wavy && waveLength >= rowPitch) {
+                throw new InputException("waveLength", Msg.NOT_BELOW, waveLength, rowPitch);
+            }
+            if (louvered && louverPitch >= rowPitch) {
+                throw new InputException("louverPitch", Msg.NOT_BELOW, louverPitch, rowPitch);
+            }
+        }
+
+        private static void required(boolean needed, String field, double value, String finType) {
+            if (needed && value == 0) {
+                throw new InputException(field, Msg.IMPOSSIBLE, "is missing: " + finType + " fins need it");
+            }
+            if (!needed && value != 0) {
+                throw new InputException(field, Msg.IMPOSSIBLE, "belongs to "
+                        + (field.startsWith("wave") ? WAVY : LOUVERED) + " fins; this coil has " + finType + " fins");
+            }
+        }
     }
 }

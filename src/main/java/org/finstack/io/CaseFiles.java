@@ -27,6 +27,18 @@ import org.finstack.units.Dimension;
  * Reads case files (format version 1). A case is one JSON object with the parts {@code coil},
  * {@code air}, {@code refrigerant} and optionally {@code fouling}; quantities are strings
  * "number unit" or bare SI numbers. Every error names the field by its dotted path.
+ *
+ * <p>Fin-pattern keys in {@code coil} (lengths), required by the fin type named in
+ * {@code finType} and refused for any other:
+ * <ul>
+ * <li>{@code "finType": "wavy"} (herringbone): {@code "waveHeight"}, the wave height Pd, peak to
+ * valley without the fin thickness; {@code "waveLength"}, the projected length Xf of
+ * <em>half</em> a wave measured in the air-flow direction, as Wang et al. define it for wavy
+ * fins (so the corrugation angle is atan(Pd / Xf)).</li>
+ * <li>{@code "finType": "louvered"}: {@code "louverPitch"}, the louver pitch Lp in the air-flow
+ * direction; {@code "louverHeight"}, the louver height Lh.</li>
+ * </ul>
+ * A plain fin takes none of them.
  */
 public final class CaseFiles {
 
@@ -41,7 +53,8 @@ public final class CaseFiles {
             "refrigerant", "fouling");
     private static final Set<String> COIL = Set.of("tubeOuterDiameter", "tubeWall", "tubeMaterial", "arrangement",
             "transversePitch", "rowPitch", "rows", "tubesPerRow", "finnedLength", "finType", "finPitch",
-            "finThickness", "finMaterial", "circuits", "coating", "coatingThickness");
+            "finThickness", "finMaterial", "circuits", "coating", "coatingThickness", "waveHeight", "waveLength",
+            "louverPitch", "louverHeight");
     private static final Set<String> AIR = Set.of("inletTemperature", "faceVelocity", "volumeFlow", "pressure",
             "relativeHumidity");
     private static final Set<String> REFRIGERANT = Set.of("fluid", "duty", "saturationTemperature",
@@ -139,7 +152,11 @@ public final class CaseFiles {
                         c.text("finType", "plain").strip().toLowerCase(java.util.Locale.ROOT),
                         c.quantity("finPitch", Dimension.FIN_PITCH), c.quantity("finThickness", Dimension.LENGTH),
                         lib.fin(c.field("finMaterial"), c.text("finMaterial")), c.has("circuits") ? c.count("circuits") : 1,
-                        coating, coatingThickness));
+                        coating, coatingThickness,
+                        new CoilGeometry.FinPattern(c.quantity("waveHeight", Dimension.LENGTH, 0),
+                                c.quantity("waveLength", Dimension.LENGTH, 0),
+                                c.quantity("louverPitch", Dimension.LENGTH, 0),
+                                c.quantity("louverHeight", Dimension.LENGTH, 0))));
     }
 
     static AirInlet air(JsonFields a) {

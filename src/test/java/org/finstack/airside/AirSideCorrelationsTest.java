@@ -34,7 +34,19 @@ class AirSideCorrelationsTest {
         assertThat(AirSideCorrelations.byId(WangChiChang2000PlainFin.ID)).isSameAs(WangChiChang2000PlainFin.INSTANCE);
         assertThat(AirSideCorrelations.byFinType("plain")).containsExactly(WangChiChang2000PlainFin.INSTANCE);
         assertThat(AirSideCorrelations.byFinType("wavy")).isEmpty();
-        assertThat(AirSideCorrelations.byFinType("louvered")).isEmpty();
+    }
+
+    @Test
+    void louveredFinIsRegisteredAndWavyIsNot() {
+        assertThat(AirSideCorrelations.byId(WangLeeChangLin1999LouveredFin.ID))
+                .isSameAs(WangLeeChangLin1999LouveredFin.INSTANCE);
+        assertThat(AirSideCorrelations.byFinType("louvered")).containsExactly(WangLeeChangLin1999LouveredFin.INSTANCE);
+        assertThat(AirSideCorrelations.standard("coil.finType", " Louvered "))
+                .isSameAs(WangLeeChangLin1999LouveredFin.INSTANCE);
+        assertThatThrownBy(() -> AirSideCorrelations.standard("coil.finType", "wavy"))
+                .isInstanceOf(InputException.class)
+                .hasMessageContaining("coil.finType")
+                .hasMessageContaining("plain, louvered");
     }
 
     @Test

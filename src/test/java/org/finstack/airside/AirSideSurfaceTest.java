@@ -58,6 +58,21 @@ class AirSideSurfaceTest {
     }
 
     @Test
+    void bareTubeAreaRatioMatchesTheUnitCell() {
+        // per tube and fin pitch: Ao = 2 (Pt Pl - pi Dc^2/4) + pi Dc (Fp - t), At = pi (Dc - 2t) Fp;
+        // hand evaluation for Dc = 10 mm, t = 0.1 mm, Pt = 25 mm, Pl = 20 mm, Fp = 2 mm:
+        // Ao = 2 (500 - 78.5398) + pi 10 1.9 = 842.9204 + 59.6903 = 902.6107 mm2,
+        // At = pi 9.8 2 = 61.5752 mm2, Ao/At = 14.6587
+        AirSideSurface s = AirSideSurface.plain(10e-3, 25e-3, 20e-3, 2e-3, 0.1e-3, 3, 2.5e-3, true);
+        assertThat(s.bareTubeAreaRatio()).isCloseTo(14.6587, org.assertj.core.data.Offset.offset(1e-4));
+        // denser fins carry more area per unit of tube
+        AirSideSurface dense = AirSideSurface.plain(10e-3, 25e-3, 20e-3, 1.5e-3, 0.1e-3, 3, 2.0e-3, true);
+        assertThat(dense.bareTubeAreaRatio()).isGreaterThan(s.bareTubeAreaRatio());
+        assertThat(rejected(() -> AirSideSurface.plain(0.2e-3, 25e-3, 20e-3, 2e-3, 0.1e-3, 3, 2.5e-3, true)).field())
+                .isEqualTo("finThickness");
+    }
+
+    @Test
     void jfRejectsNonPositiveFactors() {
         assertThat(new JF(0.01, 0.05).j()).isEqualTo(0.01);
         assertThat(rejected(() -> new JF(0, 0.05)).field()).isEqualTo("j");
