@@ -105,6 +105,11 @@ public final class EpsilonNtu {
         if (cr == 0) {
             return -Math.expm1(-ntu);
         }
+        // round-off in the series and closed forms can land a few ulps above the limit at large NTU
+        return Math.min(raw(a, ntu, cr), maxEffectiveness(a, cr));
+    }
+
+    private static double raw(Arrangement a, double ntu, double cr) {
         if (a instanceof CounterCrossflow cc) {
             return counterCrossflow(cc, ntu, cr);
         }
