@@ -79,14 +79,19 @@ public final class SegmentExchange {
         double q = effectiveness(ua / Math.min(cAir, refrigerantCapacity), cAir, refrigerantCapacity)
                 * Math.min(cAir, refrigerantCapacity) * (tA - refrigerantIn);
         double tSurface = refrigerantIn + (tA - refrigerantIn) * rIn / (rIn + rAir);
-        MoistAirState dryOut = new MoistAirState(tA - q / cAir, airIn.humidityRatio(), airIn.pressure());
-        Result dry = new Result(q, dryOut, 0, false, tSurface, ua);
+        double tDryOut = tA - q / cAir;
         if (refrigerantIn >= tA || airIn.humidityRatio() <= 0 || tSurface >= airIn.dewPoint()) {
-            return dry;
+            return new Result(q, new MoistAirState(tDryOut, airIn.humidityRatio(), airIn.pressure()), 0, false,
+                    tSurface, ua);
         }
         Result wet = wet(s, fraction, airIn, airMassFlow, refrigerantIn, refrigerantCapacity, insideCoefficient,
                 tSurface, ua, w);
-        return wet.heat() > dry.heat() ? wet : dry;
+        // a dry result whose leaving air would be supersaturated is not physical: the surface is wet
+        boolean dryPossible = airIn.humidityRatio() <= Psychrometrics.saturationHumidityRatio(tDryOut, airIn.pressure());
+        if (wet.heat() >= q || !dryPossible) {
+            return wet;
+        }
+        return new Result(q, new MoistAirState(tDryOut, airIn.humidityRatio(), airIn.pressure()), 0, false, tSurface, ua);
     }
 
     private static Result wet(CoilSurface s, double fraction, MoistAirState airIn, double mAir, double tR,
