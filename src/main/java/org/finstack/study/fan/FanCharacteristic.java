@@ -145,7 +145,8 @@ public final class FanCharacteristic {
             double speedRatio, double flow) {
         Check.positive("designFlow", designFlow);
         Check.positive("designStaticPressure", designPressure);
-        Check.within("designStaticEfficiency", designEfficiency, Double.MIN_VALUE, 1);
+        Check.positive("designStaticEfficiency", designEfficiency);
+        Check.within("designStaticEfficiency", designEfficiency, 0, 1);
         Check.positive("speedRatio", speedRatio);
         Check.nonNegative("flow", flow);
         double designPower = designFlow * designPressure / designEfficiency;
