@@ -17,19 +17,23 @@ import org.finstack.core.Warnings;
  * IEC 60335-2-89:2019 ({@link Iec60335Part2Part89}). It applies the lowest of:
  *
  * <ul>
- *   <li>toxicity, every class: {@code PL x V};</li>
+ *   <li>practical limit, every class: {@code PL x V} (the practical limit is set by toxicity or,
+ *       for many flammable refrigerants, by flammability);</li>
  *   <li>flammability, classes 2L, 2 and 3: {@code max(m1, min(room formula, m2))}, i.e. no room
  *       size below m1, the room formula between m1 and m2, and m2 as the largest charge the
  *       formula covers;</li>
  *   <li>for a self-contained appliance, classes A2L, A2, A3: the IEC 60335-2-89 limit.</li>
  * </ul>
  *
- * <p>Only formulas that can be cited are applied; the occupancy category, location class and
- * additional measures (detection, ventilation, machinery room) that EN 378 also weighs are left
- * to the engineer, and {@link #STATEMENT} says so with every result.
+ * <p>Taking the lowest limit is conservative: EN 378-1 lets some rules stand in for others (the
+ * room formula for comfort systems, no room-size check below m1), so a charge that fails this
+ * screen may still be permitted, never the reverse for the rules applied. Only formulas that can
+ * be cited are applied; the occupancy category, location class and additional measures
+ * (detection, ventilation, machinery room) that EN 378 also weighs are left to the engineer, and
+ * {@link #STATEMENT} says so with every result.
  *
  * <p>Worked example: R290 (LFL 0.038 kg/m3, practical limit 0.008 kg/m3), 0.30 kg, wall-mounted
- * unit (h0 = 1.8 m) in a room of 20 m2 floor and 50 m3: toxicity 0.4 kg, flammability
+ * unit (h0 = 1.8 m) in a room of 20 m2 floor and 50 m3: practical limit 0.008 x 50 = 0.4 kg, flammability
  * max(0.152, min(0.33764, 0.988)) = 0.33764 kg: the room formula governs and 0.30 kg is within it.
  */
 public final class ChargeScreening {
@@ -69,8 +73,8 @@ public final class ChargeScreening {
         List<ChargeLimit> limits = new ArrayList<>();
         List<String> notes = new ArrayList<>();
         double pl = refrigerant.practicalLimit();
-        limits.add(new ChargeLimit("EN 378-1 toxicity (practical limit x room volume)",
-                En378Part1AnnexC.toxicityMaxCharge(pl, roomVolume),
+        limits.add(new ChargeLimit("EN 378-1 practical limit x room volume",
+                En378Part1AnnexC.practicalLimitMaxCharge(pl, roomVolume),
                 String.format(Locale.ROOT, "%s kg/m3 x %s m3", Numbers.brief(pl), Numbers.brief(roomVolume)),
                 En378Part1AnnexC.SOURCE));
         SafetyClass cls = refrigerant.safetyClass();
@@ -99,6 +103,11 @@ public final class ChargeScreening {
         }
         ChargeLimit governing = limits.stream().min(Comparator.comparingDouble(ChargeLimit::maxCharge)).orElseThrow();
         boolean within = charge <= governing.maxCharge();
+        if (!within && cls.flammable() && charge <= En378Part1AnnexC.m1(refrigerant.lfl().orElseThrow())) {
+            notes.add("The charge is at or below m1, where EN 378-1 sets no room size for flammability; the lower "
+                    + "limit applied here is the conservative reading.");
+        }
+        notes.add("The lowest limit is applied (conservative): the standard may let one rule stand in for another.");
         return new ChargeScreeningResult(refrigerant.designation(), charge, limits, governing, within, notes,
                 STATEMENT);
     }

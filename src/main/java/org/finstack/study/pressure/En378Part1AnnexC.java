@@ -7,12 +7,12 @@ import org.finstack.core.Validity;
 import org.finstack.core.Warnings;
 
 /**
- * Refrigerant charge limits for a room of EN 378-1 Annex C: the toxicity limit, the flammability
+ * Refrigerant charge limits for a room of EN 378-1 Annex C: the practical-limit rule, the flammability
  * thresholds m1, m2, m3 and the room formula for flammable refrigerants (the same room formula
  * stands in IEC 60335-2-40 Annex GG, from memory).
  *
  * <pre>
- *   m_tox = PL x V                                       (toxicity, every class)
+ *   m_PL = PL x V                                        (practical limit, every class)
  *   m1 = 4 m3 x LFL,  m2 = 26 m3 x LFL,  m3 = 130 m3 x LFL
  *   m_max = 2.5 x LFL^(5/4) x h0 x A^(1/2)               (room formula, for m1 &lt; m &lt;= m2)
  * </pre>
@@ -145,13 +145,14 @@ public final class En378Part1AnnexC {
     }
 
     /**
-     * Largest charge by the toxicity (practical) limit.
+     * Largest charge by the practical limit (set by toxicity or, for many flammable refrigerants,
+     * by flammability).
      *
      * @param practicalLimit practical limit [kg/m3]
      * @param roomVolume     room volume [m3]
      * @return PL x V [kg]
      */
-    public static double toxicityMaxCharge(double practicalLimit, double roomVolume) {
+    public static double practicalLimitMaxCharge(double practicalLimit, double roomVolume) {
         return Check.positive("refrigerant.practicalLimit", practicalLimit) * Check.positive("room.volume", roomVolume);
     }
 }
