@@ -102,9 +102,13 @@ public final class AllowableStressTable {
      * @param temper            the temper
      * @param designTemperature design metal temperature [K]
      * @return the stress with its source
-     * @throws InputException on field {@code designTemperature} outside the tabulated range
+     * @throws InputException on field {@code designTemperature} outside the tabulated range, on
+     *                        {@code temper} when it is missing
      */
     public AllowableStress stress(String materialId, Temper temper, double designTemperature) {
+        if (temper == null) {
+            throw new InputException("temper", Msg.MISSING);
+        }
         Entry e = entry(materialId);
         Curve c = curve(e, temper);
         Temper used = e.curves.containsKey(temper) ? temper : Temper.ANNEALED;
