@@ -9,12 +9,18 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
+import java.util.List;
+import java.util.Locale;
 import java.util.Set;
 import org.finstack.coil.AirInlet;
 import org.finstack.coil.CoilCase;
 import org.finstack.coil.Duty;
 import org.finstack.coil.FoulingResistances;
+import org.finstack.coil.Circuiting;
 import org.finstack.coil.RefrigerantSide;
+import org.finstack.coil.RefrigerantSide.Model;
+import org.finstack.coil.RefrigerantSide.SaturationConvention;
+import org.finstack.coil.RefrigerantSide.Target;
 import org.finstack.core.InputException;
 import org.finstack.core.Msg;
 import org.finstack.geometry.Arrangement;
@@ -24,7 +30,7 @@ import org.finstack.material.Materials;
 import org.finstack.units.Dimension;
 
 /**
- * Reads case files (format version 1). A case is one JSON object with the parts {@code coil},
+ * Reads case files (format versions 1 and 2; version 1 files keep their meaning). A case is one JSON object with the parts {@code coil},
  * {@code air}, {@code refrigerant} and optionally {@code fouling}; quantities are strings
  * "number unit" or bare SI numbers. Every error names the field by its dotted path.
  *
@@ -43,7 +49,7 @@ import org.finstack.units.Dimension;
 public final class CaseFiles {
 
     /** Newest case-file format version this reader understands. */
-    public static final int VERSION = 1;
+    public static final int VERSION = 2;
 
     private static final ObjectMapper MAPPER = new ObjectMapper()
             .enable(DeserializationFeature.FAIL_ON_READING_DUP_TREE_KEY)
@@ -53,12 +59,13 @@ public final class CaseFiles {
             "refrigerant", "fouling");
     private static final Set<String> COIL = Set.of("tubeOuterDiameter", "tubeWall", "tubeMaterial", "arrangement",
             "transversePitch", "rowPitch", "rows", "tubesPerRow", "finnedLength", "finType", "finPitch",
-            "finThickness", "finMaterial", "circuits", "coating", "coatingThickness", "waveHeight", "waveLength",
+            "finThickness", "finMaterial", "circuits", "coating", "coatingThickness", "circuiting", "waveHeight", "waveLength",
             "louverPitch", "louverHeight");
     private static final Set<String> AIR = Set.of("inletTemperature", "faceVelocity", "volumeFlow", "pressure",
-            "relativeHumidity");
+            "relativeHumidity", "faceVelocityProfile");
     private static final Set<String> REFRIGERANT = Set.of("fluid", "duty", "saturationTemperature",
-            "insideCoefficient");
+            "saturationConvention", "insideCoefficient", "liquidTemperature", "inletTemperature", "superheat",
+            "subcooling", "massFlow", "requiredCapacity", "model", "segments");
     private static final Set<String> FOULING = Set.of("airSide", "inside", "contact");
 
     /** Standard atmosphere [Pa] (ISO 2533; NIST SP 811 Appendix B), the default barometric pressure. */
@@ -127,8 +134,15 @@ public final class CaseFiles {
         if (version < 1) {
             throw new InputException("version", Msg.NOT_POSITIVE, version);
         }
-        return new CoilCase(coil(top.object("coil", true)), air(top.object("air", true)),
-                refrigerant(top.object("refrigerant", true)), fouling(top.object("fouling", false)));
+        JsonFields coilFields = top.object("coil", true);
+        JsonFields airFields = top.object("air", true);
+        CoilGeometry coil = coil(coilFields);
+        Circuiting circuiting = coilFields.has("circuiting")
+                ? coilFields.build(() -> Circuiting.parse(coil.rows(), coil.tubesPerRow(), coilFields.textLists("circuiting")))
+                : null;
+        List<Double> profile = airFields.has("faceVelocityProfile") ? airFields.numbers("faceVelocityProfile") : List.of();
+        return new CoilCase(coil, air(airFields), refrigerant(top.object("refrigerant", true)),
+                fouling(top.object("fouling", false)), circuiting, profile);
     }
 
     /**
@@ -168,9 +182,65 @@ public final class CaseFiles {
 
     static RefrigerantSide refrigerant(JsonFields r) {
         r.onlyKeys(REFRIGERANT);
-        return r.build(() -> new RefrigerantSide(r.text("fluid"), Duty.parse(r.field("duty"), r.text("duty")),
-                        r.quantity("saturationTemperature", Dimension.TEMPERATURE),
-                        r.quantity("insideCoefficient", Dimension.HEAT_TRANSFER_COEFFICIENT)));
+        Duty duty = Duty.parse(r.field("duty"), r.text("duty"));
+        Target target = target(r, duty);
+        Model model = target instanceof Target.None ? Model.ISOTHERMAL : Model.ZONES;
+        if (r.has("model")) {
+            model = choice(r, "model", Model.values(), Model::id);
+        }
+        SaturationConvention convention = r.has("saturationConvention")
+                ? choice(r, "saturationConvention", SaturationConvention.values(), c -> c.name().toLowerCase(Locale.ROOT))
+                : SaturationConvention.DEW;
+        Model chosen = model;
+        return r.build(() -> new RefrigerantSide(r.text("fluid"), duty,
+                r.quantity("saturationTemperature", Dimension.TEMPERATURE), convention,
+                r.quantity("insideCoefficient", Dimension.HEAT_TRANSFER_COEFFICIENT, 0),
+                r.quantity("liquidTemperature", Dimension.TEMPERATURE, 0),
+                r.quantity("inletTemperature", Dimension.TEMPERATURE, 0), target, chosen,
+                r.has("segments") ? r.count("segments") : 10));
+    }
+
+    /** Exactly one of superheat, subcooling, massFlow; requiredCapacity goes with superheat or subcooling. */
+    private static Target target(JsonFields r, Duty duty) {
+        String held = duty == Duty.EVAPORATOR ? "superheat" : "subcooling";
+        String other = duty == Duty.EVAPORATOR ? "subcooling" : "superheat";
+        if (r.has(other)) {
+            throw new InputException(r.field(other), Msg.IMPOSSIBLE, "applies to " + (duty == Duty.EVAPORATOR
+                    ? "condensers" : "evaporators") + "; give the " + duty.id() + "'s " + held);
+        }
+        boolean hasHeld = r.has(held);
+        if (r.has("massFlow") && (hasHeld || r.has("requiredCapacity"))) {
+            throw new InputException(r.field("massFlow"), Msg.EXCLUSIVE, "massFlow",
+                    hasHeld ? held : "requiredCapacity");
+        }
+        double k = hasHeld ? r.quantity(held, Dimension.TEMPERATURE_DIFFERENCE) : 0;
+        if (r.has("requiredCapacity")) {
+            if (!hasHeld) {
+                throw new InputException(r.field(held), Msg.IMPOSSIBLE,
+                        "is needed with requiredCapacity: it is held while the saturation temperature is solved");
+            }
+            double q = r.quantity("requiredCapacity", Dimension.HEAT_FLOW);
+            return r.build(() -> new Target.Capacity(q, k));
+        }
+        if (r.has("massFlow")) {
+            double m = r.quantity("massFlow", Dimension.MASS_FLOW);
+            return r.build(() -> new Target.MassFlow(m));
+        }
+        if (hasHeld) {
+            return r.build(() -> duty == Duty.EVAPORATOR ? new Target.Superheat(k) : new Target.Subcooling(k));
+        }
+        return new Target.None();
+    }
+
+    private static <E> E choice(JsonFields r, String key, E[] values, java.util.function.Function<E, String> id) {
+        String text = r.text(key).strip();
+        for (E v : values) {
+            if (id.apply(v).equalsIgnoreCase(text)) {
+                return v;
+            }
+        }
+        throw new InputException(r.field(key), Msg.UNKNOWN_NAME, text,
+                java.util.Arrays.stream(values).map(id).collect(java.util.stream.Collectors.joining(", ")));
     }
 
     static FoulingResistances fouling(JsonFields f) {

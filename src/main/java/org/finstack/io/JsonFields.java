@@ -136,6 +136,41 @@ final class JsonFields {
         return v.asText();
     }
 
+    /** A list of lists of text, e.g. circuits of tube labels. */
+    java.util.List<java.util.List<String>> textLists(String key) {
+        JsonNode v = node.get(key);
+        if (!v.isArray()) {
+            throw new InputException(field(key), Msg.IMPOSSIBLE, "must be a list of lists, e.g. [[\"3-1\", \"2-1\"], ...]");
+        }
+        java.util.List<java.util.List<String>> out = new java.util.ArrayList<>();
+        for (int i = 0; i < v.size(); i++) {
+            JsonNode inner = v.get(i);
+            if (!inner.isArray()) {
+                throw new InputException(field(key) + "[" + i + "]", Msg.IMPOSSIBLE, "must be a list of tube labels");
+            }
+            java.util.List<String> items = new java.util.ArrayList<>();
+            inner.forEach(x -> items.add(x.asText()));
+            out.add(items);
+        }
+        return out;
+    }
+
+    /** A list of plain numbers. */
+    java.util.List<Double> numbers(String key) {
+        JsonNode v = node.get(key);
+        if (!v.isArray()) {
+            throw new InputException(field(key), Msg.IMPOSSIBLE, "must be a list of numbers");
+        }
+        java.util.List<Double> out = new java.util.ArrayList<>();
+        for (int i = 0; i < v.size(); i++) {
+            if (!v.get(i).isNumber()) {
+                throw new InputException(field(key) + "[" + i + "]", Msg.NOT_A_NUMBER, v.get(i).toString());
+            }
+            out.add(v.get(i).asDouble());
+        }
+        return out;
+    }
+
     String text(String key, String fallback) {
         return has(key) ? text(key) : fallback;
     }
