@@ -115,7 +115,15 @@ public final class IsothermalCoilModel {
         methods.add(DryAir.TRANSPORT_SOURCE);
         return new Rating(ID, c.refrigerant().duty(), q, tIn, tOut, mAir, volumeFlow, volumeFlow / d.faceArea(), dp,
                 d, gMax / s.props.density(), s.reynolds, s.jf.j(), s.jf.f(), s.h, s.etaFin, s.etaO, s.resistances,
-                s.ntu, s.effectiveness, s.props, w.list(), methods);
+                s.ntu, s.effectiveness, s.props, w.list(), methods, dryMoisture(c, q, tOut), null, List.of(), List.of());
+    }
+
+    /** This model is sensible-only: the air leaves with the humidity it came with. */
+    static Rating.Moisture dryMoisture(CoilCase c, double q, double tOut) {
+        AirInlet a = c.air();
+        double w = Psychrometrics.humidityRatioFromRelativeHumidity(a.temperature(), a.relativeHumidity(), a.pressure());
+        double rh = Psychrometrics.relativeHumidity(tOut, w, a.pressure());
+        return new Rating.Moisture(q, 0, 0, false, w, Math.min(1, rh));
     }
 
     private State evaluate(CoilCase c, CoilGeometry g, DerivedGeometry d, AirSideCorrelation correlation,
