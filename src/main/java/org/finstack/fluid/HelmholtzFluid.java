@@ -79,6 +79,8 @@ public final class HelmholtzFluid implements Fluid {
     private final double pMin;
     private final double rhoMax;
     private final FluidInfo info;
+    /** Transport properties, built on first use (benign race: every build gives an equal object). */
+    private volatile TransportProperties transport;
 
     /**
      * @param info           constants (the triple pressure is recomputed from the equation)
@@ -536,6 +538,20 @@ public final class HelmholtzFluid implements Fluid {
 
     private OutOfRangeException outOfRange(String property, double value, String range) {
         return new OutOfRangeException(Msg.FLUID_OUT_OF_RANGE, name, property, value, range);
+    }
+
+    /**
+     * @return viscosity, conductivity and surface tension from the fluid's published correlations
+     *         ({@link org.finstack.fluid.transport.CorrelationTransport})
+     */
+    @Override
+    public TransportProperties transport() {
+        TransportProperties t = transport;
+        if (t == null) {
+            t = org.finstack.fluid.transport.CorrelationTransport.forFluid(this);
+            transport = t;
+        }
+        return t;
     }
 
     @Override
