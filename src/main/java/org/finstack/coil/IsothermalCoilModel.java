@@ -165,7 +165,7 @@ public final class IsothermalCoilModel {
         };
     }
 
-    private static AirSideSurface surface(CoilGeometry g, DerivedGeometry d) {
+    static AirSideSurface surface(CoilGeometry g, DerivedGeometry d) {
         CoilGeometry.FinPattern p = g.finPattern();
         AirSideSurface.Pattern pattern = switch (g.finType().strip().toLowerCase(Locale.ROOT)) {
             case CoilGeometry.WAVY -> new AirSideSurface.Pattern.Wavy(p.waveHeight(), p.waveLength());
