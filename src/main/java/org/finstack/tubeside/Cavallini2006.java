@@ -28,14 +28,17 @@ import org.finstack.core.Warnings;
  * J_G^T (x_T = J_G^T sqrt(g D rho_v (rho_l - rho_v)) / G, at most 1). dT [K] is the
  * saturation-to-wall temperature difference, an input of the caller (the coil model iterates on
  * the wall temperature). C_T is chosen from the fluid name: the hydrocarbons in
- * {@link #HYDROCARBONS} get 1.6. Other symbols and units as in {@link Shah1979}.
+ * {@link #HYDROCARBONS} get 1.6. Other symbols and units as in {@link Shah1979}. In the
+ * dT-dependent regime h need not rise with quality: with a small dT the gravity-driven term
+ * h_STRAT can exceed the annular value, and h then falls towards the transition, where it
+ * joins h_A continuously; this is how the published equations behave.
  *
  * <p>Validity (from memory): pr below 0.75, rho_l/rho_v above 4, D 3 to 17 mm; the paper's
  * accuracy figures were not read here.
  *
- * <p>Worked example (fixture R134a at about 40 °C, dT = 5 K): D = 8 mm, G = 200 kg/(m2 s),
- * x = 0.5 give h = 2975.35 W/(m2 K) (dT-independent); G = 50 kg/(m2 s), x = 0.2 give
- * h = 1699.59 W/(m2 K) (dT-dependent).
+ * <p>Worked example (fixture R134a at about 40 °C, see the package comment, dT = 5 K):
+ * D = 8 mm, G = 400 kg/(m2 s), x = 0.6 give h = 3978.42 W/(m2 K) (dT-independent);
+ * G = 50 kg/(m2 s), x = 0.2 give h = 1699.59 W/(m2 K) (dT-dependent).
  */
 public final class Cavallini2006 implements CondensationCorrelation {
 

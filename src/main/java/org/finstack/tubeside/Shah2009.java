@@ -16,7 +16,8 @@ import org.finstack.core.Warnings;
  *   h_LO = 0.023 Re_LO^0.8 Pr_l^0.4 k_l / D,   Re_LO = G D / mu_l  (all the flow as liquid)
  *   J_g  = x G / sqrt(g D rho_v (rho_l - rho_v)),   Z = (1/x - 1)^0.8 pr^0.4
  * </pre>
- * Symbols and units as in {@link Shah1979}; g [m/s2] standard gravity.
+ * Symbols and units as in {@link Shah1979}; g [m/s2] standard gravity. As published, h steps
+ * down by h_Nu where the flow passes from regime II into regime I.
  *
  * <p>Validity (abstract of the paper): D 2 to 49 mm, pr 0.0008 to 0.9, G 4 to 820 kg/(m2 s),
  * all-liquid Reynolds number 68 to 85 000, Pr_l 1 to 18. Published accuracy: 1189 data
