@@ -17,7 +17,9 @@ import org.finstack.core.Warnings;
  * from {@link Rennels2012Bend} with the Churchill (1977) smooth-tube Darcy factor at
  * Re_lo = G d / mu_l; x [-] quality, G [kg/(m2 s)] mass flux, r [m] centre-line radius,
  * d [m] inner diameter. Chisholm states B for 90° bends with K_90 and extends it to other
- * angles by using that bend's own K, which is what the formula above does (from memory).
+ * angles by using that bend's own K, which is what the formula above does (from memory). For
+ * B &gt; 2 (tight bends with small K_lo) the multiplier peaks at x = B / (2 (B - 1)) and falls
+ * towards rho_l/rho_v at x = 1, as the form gives it.
  *
  * <p>Validity: r/d as for {@link Rennels2012Bend}. Chisholm gives no scatter for bends
  * (from memory); return-bend data for refrigerants (e.g. Domanski &amp; Hermes 2008) scatter
