@@ -18,8 +18,9 @@ import org.finstack.core.Warnings;
  * criterion such as Wojtan, Ursenbacher &amp; Thome 2005); every use adds a warning. It
  * ignores the dependence of the dryout quality on mass flux and heat flux.
  *
- * <p>Worked example: see {@code DryoutTest}: the coefficient equals the wet-wall value at
- * x = 0.9 and the vapour-only value at x = 1.
+ * <p>Worked example ({@link GungorWinterton1987}, fixture R134a near 5 °C of the package comment,
+ * D = 8 mm, G = 200 kg/(m2 s), q = 10 kW/m2): h(0.9) = 2896.34 W/(m2 K), h_v = 395.799 W/(m2 K),
+ * so h(0.95) = 1646.07 W/(m2 K).
  */
 public final class Dryout {
 

@@ -28,7 +28,7 @@ import org.finstack.core.Warnings;
  * differences); for a refrigerant coil the tube length is hundreds of diameters.
  *
  * <p>Validity (Gnielinski 1976): 0.5 &le; Pr &le; 2000 and 2300 &le; Re &le; 5e6; outside,
- * a warning. Published accuracy: most of the 800 data points within ±20 % (Gnielinski 1976,
+ * a warning (except below Re = 2300, where the laminar value is returned without one). Published accuracy: most of the 800 data points within ±20 % (Gnielinski 1976,
  * from memory).
  *
  * <p>Worked example: Re = 50 000, Pr = 0.8 gives Nu = 112.676; Re = 5000, Pr = 3, uniform heat

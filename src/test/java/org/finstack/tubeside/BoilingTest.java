@@ -123,6 +123,17 @@ class BoilingTest {
     }
 
     @Test
+    void dryoutWorkedExample() {
+        // Dryout Javadoc example with Gungor & Winterton 1987
+        TubeFlow f = new TubeFlow(0.008, 200, 0.95, 1e4);
+        Reference.assertRelative(2896.34, GungorWinterton1987.INSTANCE.wetWall(EVAP, f.withQuality(0.9),
+                new Warnings()), 5e-6, "h at x = 0.9");
+        Reference.assertRelative(395.799, Dryout.vapourOnly(EVAP, f, new Warnings()), 5e-6, "vapour-only h");
+        Reference.assertRelative(1646.07, GungorWinterton1987.INSTANCE.heatTransferCoefficient(EVAP, f,
+                new Warnings()), 5e-6, "h at x = 0.95");
+    }
+
+    @Test
     void kandlikarFluidParameterLookup() {
         // Kandlikar 1990 Table 3 (from memory) and Kandlikar 1991 for R134a
         Warnings w = new Warnings();
