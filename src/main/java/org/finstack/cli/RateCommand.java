@@ -6,7 +6,7 @@ import java.nio.file.Path;
 import java.util.Map;
 import java.util.concurrent.Callable;
 import org.finstack.coil.CoilCase;
-import org.finstack.coil.IsothermalCoilModel;
+import org.finstack.coil.CoilModels;
 import org.finstack.coil.Rating;
 import org.finstack.core.Citation;
 import org.finstack.geometry.DerivedGeometry;
@@ -42,7 +42,7 @@ final class RateCommand implements Callable<Integer> {
     public Integer call() throws Exception {
         UnitSystem system = Output.system(units);
         CoilCase c = CaseFiles.read(caseFile);
-        Rating r = new IsothermalCoilModel().rate(c);
+        Rating r = CoilModels.rate(c);
         PrintWriter out = spec.commandLine().getOut();
         if (json) {
             ObjectNode root = Output.envelope("rate", caseFile);

@@ -90,14 +90,21 @@ public final class ZoneCoilModel {
 
         private Outcome solveTarget() {
             RefrigerantSide r = c.refrigerant();
-            return switch (r.target()) {
-                case RefrigerantSide.Target.MassFlow m -> evaluate(m.kgPerSecond(), s.referencePressure());
-                case RefrigerantSide.Target.Superheat sh -> atOutletCondition(sh.kelvin(), s.referencePressure());
-                case RefrigerantSide.Target.Subcooling sc -> atOutletCondition(sc.kelvin(), s.referencePressure());
-                case RefrigerantSide.Target.Capacity q -> forCapacity(q);
-                case RefrigerantSide.Target.None n -> throw new InputException("refrigerant.model", Msg.IMPOSSIBLE,
-                        "the zone model needs superheat, subcooling, massFlow or requiredCapacity");
-            };
+            RefrigerantSide.Target t = r.target();
+            if (t instanceof RefrigerantSide.Target.MassFlow m) {
+                return evaluate(m.kgPerSecond(), s.referencePressure());
+            }
+            if (t instanceof RefrigerantSide.Target.Superheat sh) {
+                return atOutletCondition(sh.kelvin(), s.referencePressure());
+            }
+            if (t instanceof RefrigerantSide.Target.Subcooling sc) {
+                return atOutletCondition(sc.kelvin(), s.referencePressure());
+            }
+            if (t instanceof RefrigerantSide.Target.Capacity q) {
+                return forCapacity(q);
+            }
+            throw new InputException("refrigerant.model", Msg.IMPOSSIBLE,
+                    "the zone model needs superheat, subcooling, massFlow or requiredCapacity");
         }
 
         /** Solve the mass flow that gives the outlet superheat (evaporator) or subcooling (condenser). */
@@ -460,13 +467,13 @@ public final class ZoneCoilModel {
 
     private static double solve(DoubleUnaryOperator f, double lo, double hi, String what, double relTol) {
         try {
-            return new BrentSolver(relTol, relTol * Math.max(1e-12, Math.abs(hi)) , 1e-14).solve(MAX_EVALUATIONS,
+            return new BrentSolver(relTol, relTol * Math.max(1e-12, Math.abs(hi)), 1e-14).solve(MAX_EVALUATIONS,
                     f::applyAsDouble, lo, hi);
         } catch (TooManyEvaluationsException e) {
             throw new ConvergenceException(what, MAX_EVALUATIONS, hi - lo);
         } catch (org.apache.commons.math3.exception.NoBracketingException e) {
             throw new ConvergenceException(what + " (no sign change between " + lo + " and " + hi + ")", 0,
-                    Math.min(Math.abs(e.getFunctionValueAtLo()), Math.abs(e.getFunctionValueAtHi())));
+                    Math.min(Math.abs(e.getFLo()), Math.abs(e.getFHi())));
         }
     }
 
