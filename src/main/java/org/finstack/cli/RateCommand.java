@@ -38,6 +38,9 @@ final class RateCommand implements Callable<Integer> {
     @Option(names = "--json", description = "print one JSON object (SI values) instead of a table")
     private boolean json;
 
+    @Option(names = "--tubes", description = "add the per-tube table (tube-by-tube model)")
+    private boolean tubes;
+
     @Override
     public Integer call() throws Exception {
         UnitSystem system = Output.system(units);
@@ -46,7 +49,7 @@ final class RateCommand implements Callable<Integer> {
         PrintWriter out = spec.commandLine().getOut();
         if (json) {
             ObjectNode root = Output.envelope("rate", caseFile);
-            root.set("results", RatingJson.results(r));
+            root.set("results", RatingJson.results(r, tubes));
             out.println(Output.pretty(root));
         } else {
             table(out, c, r, system);
@@ -69,6 +72,41 @@ final class RateCommand implements Callable<Integer> {
         t.row("face velocity", r.faceVelocity(), Dimension.VELOCITY);
         t.row("air mass flow", r.airMassFlow(), Dimension.MASS_FLOW);
         t.row("air pressure drop", r.airPressureDrop(), Dimension.PRESSURE_DIFFERENCE);
+        Rating.Moisture moist = r.moisture();
+        if (moist.latentCapacity() > 0) {
+            t.row("sensible", moist.sensibleCapacity(), Dimension.HEAT_FLOW);
+            t.row("latent", moist.latentCapacity(), Dimension.HEAT_FLOW);
+            t.percent("sensible heat ratio", moist.sensibleHeatRatio());
+            t.row("condensate", moist.condensate(), Dimension.MASS_FLOW);
+        }
+        t.percent("air out, relative humidity", moist.airOutletRelativeHumidity());
+        Rating.RefrigerantResult ref = r.refrigerant();
+        if (ref != null) {
+            t.section("Refrigerant");
+            t.row("mass flow", ref.massFlow(), Dimension.MASS_FLOW);
+            t.row("in", ref.inletTemperature(), Dimension.TEMPERATURE);
+            t.row("out", ref.outletTemperature(), Dimension.TEMPERATURE);
+            if (r.duty() == org.finstack.coil.Duty.EVAPORATOR) {
+                t.row("outlet superheat", ref.outletSuperheat(), Dimension.TEMPERATURE_DIFFERENCE);
+            } else {
+                t.row("outlet subcooling", ref.outletSubcooling(), Dimension.TEMPERATURE_DIFFERENCE);
+            }
+            if (ref.outletQuality() >= 0) {
+                t.plain("outlet quality", ref.outletQuality());
+            }
+            t.row("pressure in", ref.inletPressure(), Dimension.PRESSURE);
+            t.row("pressure drop", ref.pressureDrop(), Dimension.PRESSURE_DIFFERENCE);
+            t.row("saturation temp. drop", ref.saturationTemperatureDrop(), Dimension.TEMPERATURE_DIFFERENCE);
+            t.row("charge", ref.charge(), Dimension.MASS);
+            t.percent("energy balance error", ref.energyBalanceError());
+        }
+        if (!r.zones().isEmpty()) {
+            t.section("Zones");
+            for (Rating.ZoneResult z : r.zones()) {
+                out.printf(java.util.Locale.ROOT, "  %-14s %5.1f %% of the coil  %s%s%n", z.name(), 100 * z.areaFraction(),
+                        org.finstack.units.Quantities.format(z.duty(), Dimension.HEAT_FLOW, u), z.wet() ? "  (wet)" : "");
+            }
+        }
         t.section("Heat transfer");
         t.row("air-side coefficient", r.airCoefficient(), Dimension.HEAT_TRANSFER_COEFFICIENT);
         t.plain("fin efficiency", r.finEfficiency());

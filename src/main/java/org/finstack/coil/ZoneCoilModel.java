@@ -414,7 +414,7 @@ public final class ZoneCoilModel {
             }
             Rating.RefrigerantResult ref = new Rating.RefrigerantResult(s.fluid().name(), o.massFlow, o.inletPressure,
                     pOut, in.temperature(), out.temperature(), o.inletEnthalpy, o.outletEnthalpy,
-                    out.twoPhase() ? out.quality() : -1, superheat, subcool, evaporator ? dtSat : -dtSat, o.charge, balance,
+                    out.twoPhase() ? out.quality() : -1, superheat, subcool, dtSat, o.charge, balance,
                     circuits);
             List<Rating.ZoneResult> zones = o.zones.stream().map(z -> new Rating.ZoneResult(z.name, z.fraction,
                     Math.abs(z.x.heat()), z.insideCoefficient, z.x.wet())).toList();

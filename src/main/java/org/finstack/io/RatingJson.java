@@ -24,6 +24,15 @@ public final class RatingJson {
      * @return its results object
      */
     public static ObjectNode results(Rating r) {
+        return results(r, false);
+    }
+
+    /**
+     * @param r     a rating
+     * @param tubes whether to add the per-tube table (tube-by-tube model)
+     * @return its results object
+     */
+    public static ObjectNode results(Rating r, boolean tubes) {
         JsonNodeFactory f = JsonNodeFactory.instance;
         ObjectNode o = f.objectNode();
         DerivedGeometry g = r.geometry();
@@ -59,6 +68,67 @@ public final class RatingJson {
         ObjectNode shares = o.putObject("resistanceShare");
         for (Map.Entry<String, Double> e : r.resistances().shares().entrySet()) {
             shares.put(e.getKey(), e.getValue());
+        }
+        Rating.Moisture m = r.moisture();
+        o.put("sensibleCapacity_W", m.sensibleCapacity());
+        o.put("latentCapacity_W", m.latentCapacity());
+        o.put("sensibleHeatRatio", m.sensibleHeatRatio());
+        o.put("condensate_kg_s", m.condensate());
+        o.put("frost", m.frost());
+        o.put("airOutletHumidityRatio_kg_kg", m.airOutletHumidityRatio());
+        o.put("airOutletRelativeHumidity", m.airOutletRelativeHumidity());
+        Rating.RefrigerantResult ref = r.refrigerant();
+        if (ref != null) {
+            o.put("refrigerant", ref.fluid());
+            o.put("refrigerantMassFlow_kg_s", ref.massFlow());
+            o.put("refrigerantInletPressure_Pa", ref.inletPressure());
+            o.put("refrigerantOutletPressure_Pa", ref.outletPressure());
+            o.put("refrigerantInletTemperature_C", ref.inletTemperature() - KELVIN_OFFSET);
+            o.put("refrigerantOutletTemperature_C", ref.outletTemperature() - KELVIN_OFFSET);
+            if (r.duty() == org.finstack.coil.Duty.EVAPORATOR) {
+                o.put("outletSuperheat_K", ref.outletSuperheat());
+            } else {
+                o.put("outletSubcooling_K", ref.outletSubcooling());
+            }
+            if (ref.outletQuality() >= 0) {
+                o.put("outletQuality", ref.outletQuality());
+            }
+            o.put("refrigerantPressureDrop_Pa", ref.pressureDrop());
+            o.put("saturationTemperatureDrop_K", ref.saturationTemperatureDrop());
+            o.put("charge_kg", ref.charge());
+            o.put("energyBalanceError", ref.energyBalanceError());
+            ArrayNode circuits = o.putArray("circuits");
+            for (Rating.CircuitResult c : ref.circuits()) {
+                ObjectNode n = circuits.addObject();
+                n.put("index", c.index());
+                n.put("massFlow_kg_s", c.massFlow());
+                n.put("duty_W", Math.abs(c.duty()));
+                n.put("outletTemperature_C", c.outletTemperature() - KELVIN_OFFSET);
+                n.put(r.duty() == org.finstack.coil.Duty.EVAPORATOR ? "outletSuperheat_K" : "outletSubcooling_K",
+                        r.duty() == org.finstack.coil.Duty.EVAPORATOR ? c.outletSuperheat() : c.outletSubcooling());
+                n.put("pressureDrop_Pa", c.pressureDrop());
+            }
+        }
+        ArrayNode zones = o.putArray("zones");
+        for (Rating.ZoneResult z : r.zones()) {
+            zones.addObject().put("name", z.name()).put("areaFraction", z.areaFraction()).put("duty_W", z.duty())
+                    .put("insideCoefficient_W_m2K", z.insideCoefficient()).put("wet", z.wet());
+        }
+        if (tubes) {
+            ArrayNode t = o.putArray("tubes");
+            for (Rating.TubeResult tr : r.tubes()) {
+                ObjectNode n = t.addObject();
+                n.put("circuit", tr.circuit());
+                n.put("row", tr.row() + 1);
+                n.put("tube", tr.position() + 1);
+                n.put("refrigerantInTemperature_C", tr.refrigerantInTemperature() - KELVIN_OFFSET);
+                n.put("refrigerantOutTemperature_C", tr.refrigerantOutTemperature() - KELVIN_OFFSET);
+                n.put("qualityIn", tr.qualityIn());
+                n.put("qualityOut", tr.qualityOut());
+                n.put("airInTemperature_C", tr.airInTemperature() - KELVIN_OFFSET);
+                n.put("airOutTemperature_C", tr.airOutTemperature() - KELVIN_OFFSET);
+                n.put("duty_W", tr.duty());
+            }
         }
         ArrayNode warnings = o.putArray("warnings");
         r.warnings().forEach(warnings::add);
