@@ -29,7 +29,7 @@ final class BenchCommand implements Callable<Integer> {
     @Option(names = "--fluid", paramLabel = "NAME", description = "a fluid to measure (repeatable; default: all)")
     private List<String> fluids = new ArrayList<>();
 
-    @Option(names = "--points", paramLabel = "N", defaultValue = "1000",
+    @Option(names = "--points", paramLabel = "N", defaultValue = "500",
             description = "query points per fluid (default ${DEFAULT-VALUE})")
     private int points;
 

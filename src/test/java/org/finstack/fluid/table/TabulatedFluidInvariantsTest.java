@@ -33,6 +33,13 @@ class TabulatedFluidInvariantsTest {
 
     private static final Fluid R134A = Fluids.byName("R134a");
 
+    /** The class Javadoc's example: R134a at 0 degC, 292 803 Pa as HelmholtzFluid's own example gives it. */
+    @Test
+    void javadocExample() {
+        double p = TabulatedFluid.of(Fluids.byName("R134a")).saturationAtTemperature(273.15).bubblePressure();
+        assertEquals(292803, p, 1); // Tillner-Roth & Baehr 1994 equation, as in HelmholtzFluid's Javadoc example
+    }
+
     @Test
     void phRoundTripsTheTableOwnStates() {
         Fluid t = Fluids.fast("R290");
