@@ -33,7 +33,7 @@ final class BenchCommand implements Callable<Integer> {
             description = "query points per fluid (default ${DEFAULT-VALUE})")
     private int points;
 
-    @Option(names = "--seconds", paramLabel = "S", defaultValue = "0.3",
+    @Option(names = "--seconds", paramLabel = "S", defaultValue = "0.25",
             description = "time per back end and fluid, in seconds (default ${DEFAULT-VALUE})")
     private double seconds;
 
