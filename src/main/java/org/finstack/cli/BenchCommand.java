@@ -1,0 +1,98 @@
+package org.finstack.cli;
+
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.JsonNodeFactory;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.io.PrintWriter;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.concurrent.Callable;
+import org.finstack.core.InputException;
+import org.finstack.fluid.table.TableBenchmark;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
+
+/**
+ * {@code finstack bench}: property calls per second of the equation of state and of the tables
+ * ({@link TableBenchmark}), with a coil model's mix of calls. A measurement, not a test.
+ */
+@Command(name = "bench", mixinStandardHelpOptions = true,
+        description = "Measures fluid-property calls per second: equation of state against tables.")
+final class BenchCommand implements Callable<Integer> {
+
+    @Spec
+    private CommandSpec spec;
+
+    @Option(names = "--fluid", paramLabel = "NAME", description = "a fluid to measure (repeatable; default: all)")
+    private List<String> fluids = new ArrayList<>();
+
+    @Option(names = "--points", paramLabel = "N", defaultValue = "500",
+            description = "query points per fluid (default ${DEFAULT-VALUE})")
+    private int points;
+
+    @Option(names = "--seconds", paramLabel = "S", defaultValue = "0.25",
+            description = "time per back end and fluid, in seconds (default ${DEFAULT-VALUE})")
+    private double seconds;
+
+    @Option(names = "--seed", paramLabel = "SEED", defaultValue = "1", description = "random seed of the points")
+    private long seed;
+
+    @Option(names = "--json", description = "print one JSON object")
+    private boolean json;
+
+    @Override
+    public Integer call() throws Exception {
+        TableBenchmark.Settings settings;
+        try {
+            settings = new TableBenchmark.Settings(fluids, points, seconds, seed);
+        } catch (InputException e) {
+            throw new InputException("--" + e.field(), e.msg(), e.args());
+        }
+        TableBenchmark.Result r = TableBenchmark.run(settings);
+        PrintWriter out = spec.commandLine().getOut();
+        if (json) {
+            ObjectNode root = JsonNodeFactory.instance.objectNode();
+            root.put("command", "bench");
+            ObjectNode res = root.putObject("results");
+            res.put("eosCallsPerSecond", r.eosCallsPerSecond());
+            res.put("tableCallsPerSecond", r.tableCallsPerSecond());
+            res.put("tableSpeedup", r.tableSpeedup());
+            res.put("fluids", r.fluids().size());
+            res.put("pointsPerFluid", points);
+            res.put("eosCalls", r.eosCalls());
+            res.put("tableCalls", r.tableCalls());
+            res.put("tableBuildSeconds", r.buildSeconds());
+            ArrayNode per = res.putArray("perFluid");
+            for (TableBenchmark.FluidResult f : r.fluids()) {
+                ObjectNode o = per.addObject();
+                o.put("fluid", f.fluid());
+                o.put("points", f.points());
+                o.put("droppedPoints", f.dropped());
+                o.put("buildSeconds", f.buildSeconds());
+                o.put("eosCallsPerSecond", f.eosCallsPerSecond());
+                o.put("tableCallsPerSecond", f.tableCallsPerSecond());
+                o.put("tableSpeedup", f.speedup());
+                o.put("maxTemperatureDeviation_K", f.maxDeviation());
+            }
+            root.put("method", "per point one (p, h) flash and one saturation call at p; "
+                    + "warm-up before timing; calls per second = calls / time");
+            out.println(Output.pretty(root));
+        } else {
+            out.println("Fluid-property calls per second: equation of state (EOS) against tables");
+            out.println("(per point one (p, h) flash and one saturation call; " + points + " points per fluid)");
+            out.println();
+            out.printf(Locale.ROOT, "  %-11s %9s %13s %13s %9s %11s%n", "fluid", "build [s]", "EOS [1/s]",
+                    "tables [1/s]", "speed-up", "max dT [K]");
+            for (TableBenchmark.FluidResult f : r.fluids()) {
+                out.printf(Locale.ROOT, "  %-11s %9.3f %13.0f %13.0f %8.0fx %11.1e%n", f.fluid(), f.buildSeconds(),
+                        f.eosCallsPerSecond(), f.tableCallsPerSecond(), f.speedup(), f.maxDeviation());
+            }
+            out.printf(Locale.ROOT, "  %-11s %9.3f %13.0f %13.0f %8.0fx%n", "all", r.buildSeconds(),
+                    r.eosCallsPerSecond(), r.tableCallsPerSecond(), r.tableSpeedup());
+        }
+        return 0;
+    }
+}
