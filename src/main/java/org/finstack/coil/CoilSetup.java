@@ -31,7 +31,7 @@ record CoilSetup(CoilCase c, DerivedGeometry derived, Fluid fluid, RefrigerantFl
 
     static CoilSetup of(CoilCase c) {
         CoilGeometry g = c.coil();
-        Fluid fluid = Fluids.byName(c.refrigerant().fluid());
+        Fluid fluid = Fluids.fast(c.refrigerant().fluid());
         if (fluid.name().toUpperCase(Locale.ROOT).equals("R717")) {
             if (COPPER_ALLOYS.contains(g.tubeMaterial().id())) {
                 throw new InputException("coil.tubeMaterial", Msg.IMPOSSIBLE, g.tubeMaterial().id()

@@ -169,19 +169,34 @@ public final class ZoneCoilModel {
             boolean evaporator = c.refrigerant().duty() == Duty.EVAPORATOR;
             double tAir = air.inlet().dryBulb();
             double tc = s.fluid().info().criticalTemperature();
-            double lo = evaporator ? Math.max(tAir - 60, s.fluid().info().minTemperature() + 1) : tAir + 0.5;
-            double hi = evaporator ? tAir - 0.5 : Math.min(tAir + 60, tc - 2);
+            // a held superheat or subcooling needs at least that much temperature difference to the air
+            double lo = evaporator ? Math.max(tAir - 40, s.fluid().info().minTemperature() + 3) : tAir + q.outletK() + 1;
+            double hi = evaporator ? tAir - q.outletK() - 1 : Math.min(tAir + 40, tc - 3);
             DoubleUnaryOperator miss = t -> {
                 double p = CoilSetup.referencePressure(s.fluid(), withSaturation(t));
                 return Math.abs(atOutletCondition(q.outletK(), p).duty) - q.watts();
             };
-            double fLo = miss.applyAsDouble(lo);
-            double fHi = miss.applyAsDouble(hi);
-            if (fLo * fHi > 0) {
+            // the far end of the range may be unreachable (e.g. the liquid no longer flashes): step inwards
+            double fLo = Double.NaN;
+            double fHi = Double.NaN;
+            for (int i = 0; i < 8 && Double.isNaN(fLo); i++) {
+                try {
+                    fLo = miss.applyAsDouble(lo);
+                } catch (InputException | ConvergenceException e) {
+                    lo += evaporator ? 4 : 2;
+                }
+            }
+            for (int i = 0; i < 8 && Double.isNaN(fHi); i++) {
+                try {
+                    fHi = miss.applyAsDouble(hi);
+                } catch (InputException | ConvergenceException e) {
+                    hi -= evaporator ? 2 : 4;
+                }
+            }
+            if (Double.isNaN(fLo) || Double.isNaN(fHi) || fLo * fHi > 0) {
                 throw new InputException("refrigerant.requiredCapacity", Msg.IMPOSSIBLE, String.format(Locale.ROOT,
-                        "%.0f W is outside what this coil delivers between saturation temperatures %.1f C and %.1f C "
-                                + "(%.0f W to %.0f W)", q.watts(), lo - 273.15, hi - 273.15, fLo + q.watts(),
-                        fHi + q.watts()));
+                        "%.0f W is outside what this coil delivers between saturation temperatures %.1f C and %.1f C",
+                        q.watts(), lo - 273.15, hi - 273.15));
             }
             double t = solve(miss, lo, hi, "saturation temperature for the required capacity", 1e-7);
             return atOutletCondition(q.outletK(), CoilSetup.referencePressure(s.fluid(), withSaturation(t)));
@@ -215,8 +230,9 @@ public final class ZoneCoilModel {
             RefrigerantFlow.Local in = s.flow().at(pIn, hIn);
             if (!in.twoPhase()) {
                 throw new InputException("refrigerant.liquidTemperature", Msg.IMPOSSIBLE, String.format(Locale.ROOT,
-                        "liquid at %.1f C does not flash into the evaporator's two-phase region at %.1f C saturation",
-                        r.liquidTemperature() - 273.15, r.saturationTemperature() - 273.15));
+                        "liquid at %.1f C does not flash into the evaporator's two-phase region at its inlet "
+                                + "(saturation %.1f C there, after the refrigerant pressure drop)",
+                        r.liquidTemperature() - 273.15, s.fluid().saturationAtPressure(pIn).bubbleTemperature() - 273.15));
             }
             SaturationState satOut = s.fluid().saturationAtPressure(pOut);
             double hDew = satOut.vapour().enthalpy();
