@@ -180,7 +180,7 @@ public final class Lemmon2003PseudoPureBlend implements Fluid {
     @Override
     public SaturationState saturationAtPressure(double pressure) {
         Check.finite("pressure", pressure);
-        if (pressure < pMinSat || pressure >= pc) {
+        if (pressure < pMinSat * (1 - 1e-12) || pressure >= pc) {
             throw outOfRange("saturation pressure [Pa]", pressure,
                     Numbers.brief(pMinSat) + " Pa (bubble point at " + plain(tMin) + " K) to below "
                             + Numbers.brief(pc) + " Pa");
@@ -219,10 +219,15 @@ public final class Lemmon2003PseudoPureBlend implements Fluid {
         }
         // the pressure whose two-phase state of this quality has this temperature:
         // g(p) = T_b(p) + q (T_d(p) - T_b(p)) - T rises with p, g(p_dew(T)) <= 0 <= g(p_bubble(T))
-        double lo = Math.log(sat.dewPressure());
+        double lo = Math.log(Math.max(sat.dewPressure(), pMinSat));
         double hi = Math.log(sat.bubblePressure());
         double gLo = glideTemperature(Math.exp(lo), quality) - temperature;
         double gHi = glideTemperature(Math.exp(hi), quality) - temperature;
+        if (gLo > 0) {
+            // the pressure lies below the bubble point at the lowest temperature of the range
+            throw outOfRange("T [K] at quality " + Numbers.brief(quality), temperature,
+                    "two-phase states with both saturation states at or above " + plain(tMin) + " K");
+        }
         double x = lo;
         double g = gLo;
         for (int it = 0; it < MAX_ITER; it++) {
@@ -234,7 +239,7 @@ public final class Lemmon2003PseudoPureBlend implements Fluid {
                 x = 0.5 * (lo + hi);
             }
             g = glideTemperature(Math.exp(x), quality) - temperature;
-            if (Math.abs(g) <= 1e-10 * temperature || hi - lo <= 1e-14) {
+            if (Math.abs(g) <= 1e-12 * temperature || hi - lo <= 1e-14) {
                 return mix(saturationAtPressure(Math.exp(x)), quality);
             }
             // Illinois modification of regula falsi keeps both ends moving
@@ -248,7 +253,7 @@ public final class Lemmon2003PseudoPureBlend implements Fluid {
                 gHi *= 0.5;
             }
         }
-        if (Math.abs(g) <= 1e-10 * temperature) {
+        if (Math.abs(g) <= 1e-12 * temperature) {
             return mix(saturationAtPressure(Math.exp(x)), quality);
         }
         throw new ConvergenceException(name + " pressure at T = " + Numbers.brief(temperature) + " K, q = "
@@ -257,7 +262,7 @@ public final class Lemmon2003PseudoPureBlend implements Fluid {
 
     /** Temperature of the two-phase state of quality q at p [K]. */
     private double glideTemperature(double pressure, double quality) {
-        if (pressure < pMinSat) {
+        if (pressure < pMinSat * (1 - 1e-12)) {
             throw outOfRange("saturation pressure [Pa]", pressure,
                     Numbers.brief(pMinSat) + " Pa (bubble point at " + plain(tMin) + " K) to below "
                             + Numbers.brief(pc) + " Pa");
@@ -392,7 +397,9 @@ public final class Lemmon2003PseudoPureBlend implements Fluid {
     private FluidState onPhase(double temperature, double pressure, Phase phase, double quality) {
         double rho = phase == Phase.LIQUID ? liquidDensity(temperature, pressure) : vapourDensity(temperature, pressure);
         HelmholtzEos.Properties pr = helmholtz.properties(temperature, rho);
-        return new FluidState(temperature, pr.pressure(), rho, pr.enthalpy() + dh, pr.entropy() + ds, pr.cp(), pr.cv(),
+        // the state carries the pressure it was solved for (the equation's pressure at the solved
+        // density agrees to the solver's tolerance)
+        return new FluidState(temperature, pressure, rho, pr.enthalpy() + dh, pr.entropy() + ds, pr.cp(), pr.cv(),
                 pr.speedOfSound(), phase, quality);
     }
 
