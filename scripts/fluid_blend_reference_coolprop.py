@@ -14,7 +14,7 @@ Column "blend": 0 = R410A, 1 = R404A, 2 = R407C, 3 = R507A.
 
   fluid-blend-saturation.csv  blend, T [K], p_bubble p_dew [Pa], rho' rho'' [kg/m3], h' h'' [J/kg],
                               s' s'' [J/(kg K)], cp' cp'' [J/(kg K)], w' w'' [m/s];
-                              T = -50..+60 degC every 10 K
+                              T = -50..+60 degC every 10 K, and Tc - 2, 0.5, 0.2 K
   fluid-blend-pressure.csv    blend, p [Pa], T_bubble T_dew [K], h' h'' [J/kg], T at q = 0.5 [K],
                               rho at q = 0.5 [kg/m3]
   fluid-blend-states.csv      blend, T [K], p [Pa], rho [kg/m3], h [J/kg], s [J/(kg K)],
@@ -48,20 +48,20 @@ def main():
     for n in BLENDS:
         CP.set_reference_state(n, "IIR")
     with open(os.path.join(OUT, "fluid-blend-saturation.csv"), "w") as f:
-        header(f, "bubble (Q=0) and dew (Q=1) states at -50..+60 degC every 10 K",
+        header(f, "bubble (Q=0) and dew (Q=1) states at -50..+60 degC every 10 K and 2, 0.5, 0.2 K below Tc",
                "-, K, Pa, Pa, kg/m3, kg/m3, J/kg, J/kg, J/(kg K), J/(kg K), J/(kg K), J/(kg K), m/s, m/s",
-               "relative 1e-8 (p), 1e-7 (rho, h, s), 1e-6 (cp, w)")
+               "relative 1e-9 (p), 1e-8 (rho, h, s, latent heat; h and s relative to at least 200 kJ/kg and 1 kJ/(kg K)), 1e-7 (cp, w)")
         f.write("blend,T,pBubble,pDew,rhoL,rhoV,hL,hV,sL,sV,cpL,cpV,wL,wV\n")
         for i, n in enumerate(BLENDS):
-            for tc_deg in range(-50, 61, 10):
-                t = 273.15 + tc_deg
+            tc = CP.PropsSI("Tcrit", n)
+            for t in [273.15 + d for d in range(-50, 61, 10)] + [tc - 2, tc - 0.5, tc - 0.2]:
                 vals = [i, t, CP.PropsSI("P", "T", t, "Q", 0, n), CP.PropsSI("P", "T", t, "Q", 1, n)]
                 for out in ("Dmass", "Hmass", "Smass", "Cpmass", "speed_of_sound"):
                     vals += [CP.PropsSI(out, "T", t, "Q", 0, n), CP.PropsSI(out, "T", t, "Q", 1, n)]
                 row(f, vals)
     with open(os.path.join(OUT, "fluid-blend-pressure.csv"), "w") as f:
         header(f, "bubble and dew temperatures at given pressure, and the two-phase state at q = 0.5",
-               "-, Pa, K, K, J/kg, J/kg, K, kg/m3", "relative 1e-9 (T), 1e-7 (h, rho)")
+               "-, Pa, K, K, J/kg, J/kg, K, kg/m3", "relative 1e-10 (T), 1e-8 (h relative to at least 200 kJ/kg, rho); glide 1e-7 K absolute")
         f.write("blend,p,TBubble,TDew,hL,hV,Thalf,rhoHalf\n")
         for i, n in enumerate(BLENDS):
             for p in (0.5e5, 1e5, 2e5, 5e5, 1e6, 2e6, 3e6, 3.5e6):
@@ -71,7 +71,7 @@ def main():
     with open(os.path.join(OUT, "fluid-blend-states.csv"), "w") as f:
         header(f, "single-phase states: compressed liquid, superheated vapour, supercritical",
                "-, K, Pa, kg/m3, J/kg, J/(kg K), J/(kg K), J/(kg K), m/s",
-               "relative 1e-7 (rho, h, s), 1e-6 (cp, cv, w)")
+               "relative 1e-8 (rho, h, s; h and s relative to at least 200 kJ/kg and 1 kJ/(kg K)), 1e-7 (cp, cv, w); T from (p, h) 1e-9")
         f.write("blend,T,p,rho,h,s,cp,cv,w\n")
         for i, n in enumerate(BLENDS):
             tc = CP.PropsSI("Tcrit", n)

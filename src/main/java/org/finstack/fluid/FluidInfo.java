@@ -20,8 +20,10 @@ import org.finstack.core.Citation;
  * @param criticalPressure     pc [Pa]
  * @param criticalDensity      rho_c [kg/m3]
  * @param molarMass            M [kg/mol]
- * @param tripleTemperature    triple-point temperature [K]
+ * @param tripleTemperature    triple-point temperature [K] (for a blend, which has no triple point:
+ *                             the lowest temperature of the equation's range)
  * @param triplePressure       vapour pressure at the triple point, from the equation of state [Pa]
+ *                             (for a blend: the bubble-point pressure at the lowest temperature)
  * @param minTemperature       lowest valid temperature [K]
  * @param maxTemperature       highest valid temperature [K]
  * @param maxPressure          highest valid pressure [Pa]

@@ -55,7 +55,9 @@ import org.finstack.fluid.eos.HelmholtzEos;
  * bubble point at 0 degC (the equation's constant offsets in h and s are shifted to that).
  *
  * <p>Validity (the paper's range, {@link #VALIDITY}): 200 K to 500 K, pressures up to 50 MPa;
- * saturation from 200 K up to below the pseudo-critical temperature. There is no triple point:
+ * saturation from 200 K up to below the pseudo-critical temperature (for R-404A and R-407C the
+ * paper's bubble-point equation rises slightly above pc within about 0.1 K of Tc, so there
+ * {@code saturationAtPressure} covers pressures only up to pc). There is no triple point:
  * {@link FluidInfo#tripleTemperature()} holds the lower limit 200 K and
  * {@link FluidInfo#triplePressure()} the bubble-point pressure there. Outside the range the methods
  * throw {@link OutOfRangeException}. Stated uncertainty (Lemmon 2003, as quoted with the
@@ -86,6 +88,8 @@ public final class Lemmon2003PseudoPureBlend implements Fluid {
     private static final double IIR_ENTROPY = 1_000;
 
     private static final int MAX_ITER = 100;
+    /** Most steps when bracketing a density root. */
+    private static final int MARCH = 400;
 
     private final String name;
     private final HelmholtzFluid eos;
@@ -100,6 +104,7 @@ public final class Lemmon2003PseudoPureBlend implements Fluid {
     private final double tMax;
     private final double tc;
     private final double pc;
+    private final double rhoc;
     private final double pMax;
     /** Bubble pressure at tMin: the lowest pressure with both saturation states in range [Pa]. */
     private final double pMinSat;
@@ -131,6 +136,7 @@ public final class Lemmon2003PseudoPureBlend implements Fluid {
         this.tMax = e.maxTemperature();
         this.tc = e.criticalTemperature();
         this.pc = e.criticalPressure();
+        this.rhoc = e.criticalDensity();
         this.pMax = e.maxPressure();
         this.rhoMax = 1.5 * liquidStart.at(tMin) * helmholtz.molarMass();
         double rhoRef = liquidDensity(IIR_TEMPERATURE, bubble.pressure(IIR_TEMPERATURE));
@@ -403,27 +409,38 @@ public final class Lemmon2003PseudoPureBlend implements Fluid {
                 pr.speedOfSound(), phase, quality);
     }
 
-    /** Liquid root: bracket from the ancillary liquid density, then Newton with bisection. */
+    /**
+     * Liquid root: from the ancillary liquid density, up until the pressure exceeds p on the
+     * stable branch, then down in steps of at most 2 % (shortened where a step would cross the
+     * spinodal) until it falls below p; Newton with bisection inside that bracket.
+     */
     private double liquidDensity(double t, double p) {
         double hi = liquidStart.at(Math.min(t, tc)) * helmholtz.molarMass();
         int guard = 0;
-        while (helmholtz.pressure(t, hi) < p) {
+        double[] ps = helmholtz.pressureAndSlope(t, hi);
+        while (!(ps[1] > 0) || ps[0] < p) {
             hi *= 1.05;
-            if (hi > rhoMax || ++guard > MAX_ITER) {
+            if (hi > rhoMax || ++guard > MARCH) {
                 throw outOfRange("p [Pa] at T = " + Numbers.brief(t) + " K", p,
                         "below the pressure at " + Numbers.brief(rhoMax) + " kg/m3");
             }
+            ps = helmholtz.pressureAndSlope(t, hi);
         }
-        double lo = hi;
+        double step = 0.02;
+        double lo;
         for (int it = 0; ; it++) {
-            double next = lo / 1.02;
-            double[] ps = helmholtz.pressureAndSlope(t, next);
-            if (!(ps[1] > 0) || it > MAX_ITER) {
+            double next = hi / (1 + step);
+            double[] pn = helmholtz.pressureAndSlope(t, next);
+            if (it > MARCH || step < 1e-10) {
                 throw new ConvergenceException(name + " liquid density at T = " + Numbers.brief(t) + " K, p = "
-                        + Numbers.brief(p) + " Pa (no liquid root above the spinodal)", it, ps[0] / p - 1);
+                        + Numbers.brief(p) + " Pa (no liquid root above the spinodal)", it, pn[0] / p - 1);
             }
-            lo = next;
-            if (ps[0] <= p) {
+            if (!(pn[1] > 0)) {
+                step /= 4;
+                continue;
+            }
+            if (pn[0] <= p) {
+                lo = next;
                 break;
             }
             hi = next;
@@ -431,21 +448,30 @@ public final class Lemmon2003PseudoPureBlend implements Fluid {
         return solveDensity(t, p, lo, hi, 0.5 * (lo + hi));
     }
 
-    /** Vapour root: bracket upwards from zero density, then Newton with bisection. */
+    /**
+     * Vapour root: from a low density, up in steps of at most 5 % (shortened where a step would
+     * cross the spinodal) until the pressure exceeds p; Newton with bisection inside that bracket.
+     */
     private double vapourDensity(double t, double p) {
         double lo = 0;
-        double hi = p / (helmholtz.specificGasConstant() * t);
+        double hi = Math.min(p / (helmholtz.specificGasConstant() * t), 0.1 * rhoc);
+        double step = 0.05;
         for (int it = 0; ; it++) {
             double[] ps = helmholtz.pressureAndSlope(t, hi);
-            if (!(ps[1] > 0) || it > MAX_ITER) {
+            if (it > MARCH || step < 1e-10) {
                 throw new ConvergenceException(name + " vapour density at T = " + Numbers.brief(t) + " K, p = "
                         + Numbers.brief(p) + " Pa (no vapour root below the spinodal)", it, ps[0] / p - 1);
+            }
+            if (!(ps[1] > 0)) {
+                step /= 4;
+                hi = lo > 0 ? lo * (1 + step) : 0.5 * hi;
+                continue;
             }
             if (ps[0] >= p) {
                 break;
             }
             lo = hi;
-            hi *= 1.05;
+            hi = lo * (1 + step);
         }
         return solveDensity(t, p, lo, hi, hi);
     }

@@ -155,6 +155,20 @@ class Lemmon2003PseudoPureBlendTest {
         assertThrows(InputException.class, () -> f.at(null, 300, 1e5));
     }
 
+    /** Bubble and dew states exist up to 0.05 K below the pseudo-critical temperature. */
+    @ParameterizedTest
+    @ValueSource(strings = {"R410A", "R404A", "R407C", "R507A"})
+    void saturationCloseToThePseudoCriticalPoint(String name) {
+        Fluid f = Fluids.byName(name);
+        FluidInfo i = f.info();
+        SaturationState s = f.saturationAtTemperature(i.criticalTemperature() - 0.05);
+        assertTrue(s.liquid().density() > s.vapour().density(), name + ": rho' > rho''");
+        // R-404A and R-407C: the bubble-point equation rises slightly above pc in the last tenth of a
+        // kelvin below Tc (positive theta^0.54 term of the paper's fit)
+        assertTrue(s.bubblePressure() > s.dewPressure() && s.bubblePressure() < 1.005 * i.criticalPressure(), name);
+        assertTrue(s.latentHeat() > 0, name);
+    }
+
     /** Below the dew pressure at 200 K every state in range is vapour; (p, h) still solves. */
     @Test
     void vapourBelowTheLowestDewPressure() {
