@@ -61,7 +61,9 @@ public enum Msg {
     /** {0} duty, {1} above/below, {2} saturation temperature in C, {3} air temperature in C. */
     DUTY_DIRECTION(4),
     /** {0} fin type, {1} fin types available. */
-    NO_CORRELATION(2);
+    NO_CORRELATION(2),
+    /** {0} fluid, {1} reason. */
+    UNSUPPORTED_FLUID(2);
 
     private static final String BUNDLE = "org.finstack.core.messages";
 

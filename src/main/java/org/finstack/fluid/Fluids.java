@@ -8,6 +8,8 @@ import java.util.Map;
 import java.util.concurrent.ConcurrentHashMap;
 import org.finstack.core.InputException;
 import org.finstack.core.Msg;
+import org.finstack.fluid.blend.PseudoPureBlendFile;
+import org.finstack.fluid.blend.UnsupportedBlends;
 import org.finstack.fluid.table.TabulatedFluid;
 
 /**
@@ -18,6 +20,10 @@ import org.finstack.fluid.table.TabulatedFluid;
  *
  * <p>{@link #byName(String)} gives the exact equation of state; coil models take
  * {@link #fast(String)}, the tables of the {@link #DEFAULT_BACKEND}.
+ *
+ * <p>Blends: R410A, R404A, R407C and R507A are pseudo-pure fluids
+ * ({@link org.finstack.fluid.blend.Lemmon2003PseudoPureBlend}). Blends that need a multi-fluid
+ * mixture model ({@link #unsupported()}) are refused by name with the reason.
  */
 public final class Fluids {
 
@@ -49,11 +55,14 @@ public final class Fluids {
     private static Map<String, String> files() {
         Map<String, String> m = new LinkedHashMap<>();
         for (String n : List.of("R134a", "R32", "R125", "R290", "R600a", "R717", "R1234yf", "R1234ze(E)", "R22",
-                "R143a", "R1270", "R744")) {
+                "R143a", "R1270", "R744", "R410A", "R404A", "R407C", "R507A")) {
             m.put(n, "/org/finstack/fluid/" + n.toLowerCase(Locale.ROOT).replace("(", "").replace(")", "") + ".json");
         }
         return java.util.Collections.unmodifiableMap(m);
     }
+
+    /** The pseudo-pure blends among {@link #FILES}. */
+    private static final List<String> BLENDS = List.of("R410A", "R404A", "R407C", "R507A");
 
     /** Aliases (normalised) to canonical names; built from the names and well-known trade aliases. */
     private static final Map<String, String> ALIASES = aliases();
@@ -68,7 +77,7 @@ public final class Fluids {
             {"isobutane", "R600a"}, {"HC600a", "R600a"}, {"ammonia", "R717"}, {"NH3", "R717"},
             {"HFO1234yf", "R1234yf"}, {"HFO1234ze(E)", "R1234ze(E)"}, {"HCFC22", "R22"}, {"HFC143a", "R143a"},
             {"propylene", "R1270"}, {"propene", "R1270"}, {"HC1270", "R1270"}, {"CO2", "R744"},
-            {"carbondioxide", "R744"},
+            {"carbondioxide", "R744"}, {"R507", "R507A"},
         };
         for (String[] e : extra) {
             m.put(normalise(e[0]), e[1]);
@@ -87,14 +96,21 @@ public final class Fluids {
     /**
      * @param name trade name, e.g. {@code "R-134a"}
      * @return the fluid
-     * @throws InputException ({@code refrigerant.fluid}, {@link Msg#UNKNOWN_NAME}) if unknown
+     * @throws InputException ({@code refrigerant.fluid}, {@link Msg#UNKNOWN_NAME}) if unknown, or
+     *                        ({@code refrigerant.fluid}, {@link Msg#UNSUPPORTED_FLUID}) for a blend
+     *                        Finstack cannot compute yet ({@link #unsupported()}), with the reason
      */
     public static Fluid byName(String name) {
         String canonical = name == null ? null : ALIASES.get(normalise(name));
         if (canonical == null) {
-            throw new InputException("refrigerant.fluid", Msg.UNKNOWN_NAME, name, String.join(", ", names()));
+            String refused = name == null ? null : UNSUPPORTED.get(normalise(name));
+            if (refused != null) {
+                throw new InputException("refrigerant.fluid", Msg.UNSUPPORTED_FLUID, refused,
+                        UnsupportedBlends.reasons().get(refused));
+            }
+            throw new InputException("refrigerant.fluid", Msg.UNKNOWN_NAME, name, String.join(", ", FILES.keySet()));
         }
-        return LOADED.computeIfAbsent(canonical, n -> FluidFile.load(FILES.get(n)));
+        return LOADED.computeIfAbsent(canonical, Fluids::load);
     }
 
     /**
@@ -123,15 +139,45 @@ public final class Fluids {
         return byName(name, DEFAULT_BACKEND);
     }
 
-    /** @return the canonical names of all known fluids */
-    public static List<String> names() {
-        return List.copyOf(FILES.keySet());
+    private static Fluid load(String canonical) {
+        String file = FILES.get(canonical);
+        HelmholtzFluid eos = FluidFile.load(file);
+        return BLENDS.contains(canonical) ? PseudoPureBlendFile.load(file, eos) : eos;
     }
 
-    /** @return every known fluid (loading those not yet loaded) */
+    /** Normalised names of the refused blends to their canonical names. */
+    private static final Map<String, String> UNSUPPORTED = unsupportedNames();
+
+    private static Map<String, String> unsupportedNames() {
+        Map<String, String> m = new LinkedHashMap<>();
+        for (String n : UnsupportedBlends.reasons().keySet()) {
+            m.put(normalise(n), n);
+        }
+        return Map.copyOf(m);
+    }
+
+    /**
+     * @return blends the trade uses that Finstack refuses (they need a multi-fluid mixture model),
+     *         canonical name to reason, in a fixed order
+     */
+    public static Map<String, String> unsupported() {
+        return UnsupportedBlends.reasons();
+    }
+
+    /** @return the canonical names of all known pure fluids (blends: {@link #blendNames()}) */
+    public static List<String> names() {
+        return FILES.keySet().stream().filter(n -> !BLENDS.contains(n)).toList();
+    }
+
+    /** @return the canonical names of the supported (pseudo-pure) blends */
+    public static List<String> blendNames() {
+        return BLENDS;
+    }
+
+    /** @return every known pure fluid (loading those not yet loaded); blends are not included */
     public static List<Fluid> all() {
         List<Fluid> out = new ArrayList<>();
-        for (String n : FILES.keySet()) {
+        for (String n : names()) {
             out.add(byName(n));
         }
         return List.copyOf(out);
