@@ -98,6 +98,8 @@ final class RateCommand implements Callable<Integer> {
             t.row("pressure drop", ref.pressureDrop(), Dimension.PRESSURE_DIFFERENCE);
             t.row("saturation temp. drop", ref.saturationTemperatureDrop(), Dimension.TEMPERATURE_DIFFERENCE);
             t.row("charge", ref.charge(), Dimension.MASS);
+            t.row("temperature difference", RatingJson.temperatureDifference(r), Dimension.TEMPERATURE_DIFFERENCE);
+            out.println("    (" + RatingJson.TD_BASIS + ")");
             t.percent("energy balance error", ref.energyBalanceError());
         }
         if (!r.zones().isEmpty()) {

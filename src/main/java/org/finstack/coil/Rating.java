@@ -110,11 +110,14 @@ public record Rating(String model, Duty duty, double capacity, double airInletTe
      * @param charge                    refrigerant held in the coil's tubes [kg]
      * @param energyBalanceError        (air-side duty - refrigerant-side duty) / duty [-]
      * @param circuits                  each circuit's outlet state
+     * @param inletDewTemperature       dew-point temperature at the inlet pressure [K]
+     * @param outletDewTemperature      dew-point temperature at the outlet pressure [K]
      */
     public record RefrigerantResult(String fluid, double massFlow, double inletPressure, double outletPressure,
             double inletTemperature, double outletTemperature, double inletEnthalpy, double outletEnthalpy,
             double outletQuality, double outletSuperheat, double outletSubcooling, double saturationTemperatureDrop,
-            double charge, double energyBalanceError, List<CircuitResult> circuits) {
+            double charge, double energyBalanceError, List<CircuitResult> circuits, double inletDewTemperature,
+            double outletDewTemperature) {
 
         /** Copies the list. */
         public RefrigerantResult {

@@ -431,14 +431,15 @@ public final class ZoneCoilModel {
             Rating.RefrigerantResult ref = new Rating.RefrigerantResult(s.fluid().name(), o.massFlow, o.inletPressure,
                     pOut, in.temperature(), out.temperature(), o.inletEnthalpy, o.outletEnthalpy,
                     out.twoPhase() ? out.quality() : -1, superheat, subcool, dtSat, o.charge, balance,
-                    circuits);
+                    circuits, satIn.dewTemperature(), satOut.dewTemperature());
             List<Rating.ZoneResult> zones = o.zones.stream().map(z -> new Rating.ZoneResult(z.name, z.fraction,
                     Math.abs(z.x.heat()), z.insideCoefficient, z.x.wet())).toList();
             boolean frost = o.zones.stream().anyMatch(z -> z.x.frost());
             double capacity = Math.abs(airDuty);
             double cpA = 1006 + 1860 * air.inlet().humidityRatio(); // ASHRAE moist-air enthalpy relation
             double sensible = Math.abs(air.massFlow() * cpA * (air.inlet().dryBulb() - o.airOut.dryBulb()));
-            double latent = Math.max(0, capacity - sensible);
+            double latent = o.condensate > 0 ? Math.max(0, capacity - sensible) : 0;
+            sensible = o.condensate > 0 ? sensible : capacity;
             if (frost) {
                 w.add(String.format(Locale.ROOT, "the fin surface runs below 0 C in humid air: frost forms at about "
                         + "%.3f kg/h and will narrow the air passages until the coil is defrosted", o.condensate * 3600));

@@ -16,7 +16,24 @@ public final class RatingJson {
 
     private static final double KELVIN_OFFSET = 273.15;
 
+    /** How the reported temperature difference is defined (the basis refrigeration practice rates on). */
+    public static final String TD_BASIS = "entering air minus the dew-point saturation temperature at the evaporator "
+            + "outlet; for a condenser the dew-point condensing temperature at the inlet minus the entering air";
+
     private RatingJson() {
+    }
+
+    /**
+     * The coil's temperature difference on the basis {@link #TD_BASIS}.
+     *
+     * @param r a full rating (with a refrigerant result)
+     * @return [K]
+     */
+    public static double temperatureDifference(Rating r) {
+        Rating.RefrigerantResult ref = r.refrigerant();
+        return r.duty() == org.finstack.coil.Duty.EVAPORATOR
+                ? r.airInletTemperature() - ref.outletDewTemperature()
+                : ref.inletDewTemperature() - r.airInletTemperature();
     }
 
     /**
@@ -94,6 +111,8 @@ public final class RatingJson {
                 o.put("outletQuality", ref.outletQuality());
             }
             o.put("refrigerantPressureDrop_Pa", ref.pressureDrop());
+            o.put("temperatureDifference_K", temperatureDifference(r));
+            o.put("temperatureDifferenceBasis", TD_BASIS);
             o.put("saturationTemperatureDrop_K", ref.saturationTemperatureDrop());
             o.put("charge_kg", ref.charge());
             o.put("energyBalanceError", ref.energyBalanceError());
