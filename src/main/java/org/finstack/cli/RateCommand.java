@@ -50,6 +50,9 @@ final class RateCommand implements Callable<Integer> {
         if (json) {
             ObjectNode root = Output.envelope("rate", caseFile);
             root.set("results", RatingJson.results(r, tubes));
+            com.fasterxml.jackson.databind.node.ArrayNode cautions = root.putArray("cautions");
+            org.finstack.study.Cautions.forFluid(org.finstack.fluid.Fluids.byName(c.refrigerant().fluid()))
+                    .forEach(cautions::add);
             out.println(Output.pretty(root));
         } else {
             table(out, c, r, system);
@@ -139,6 +142,9 @@ final class RateCommand implements Callable<Integer> {
             t.section("Warnings");
             r.warnings().forEach(w -> out.println("  ! " + w));
         }
+        t.section("Cautions");
+        org.finstack.study.Cautions.forFluid(org.finstack.fluid.Fluids.byName(c.refrigerant().fluid()))
+                .forEach(x -> out.println("  * " + x));
         t.section("Methods");
         for (Citation m : r.methods()) {
             out.println("  " + m.key() + " - " + m.reference());

@@ -69,6 +69,7 @@ public final class IsothermalCoilModel {
         AirInlet air = c.air();
         RefrigerantSide ref = c.refrigerant();
         checkDirection(air, ref);
+        org.finstack.fluid.Fluids.byName(ref.fluid()); // an unknown or unsupported refrigerant is refused by name
         AirSideCorrelation correlation = AirSideCorrelations.standard("coil.finType", g.finType());
         AirSideSurface surface = surface(g, d);
         PlateFinCell cell = new PlateFinCell(d.collarDiameter(), g.finThickness(), g.transversePitch(),
