@@ -9,7 +9,7 @@ import java.util.ResourceBundle;
  * The catalogue of error messages. Each constant's text lives in
  * {@code org/finstack/core/messages.properties} under the constant's name, as a
  * {@link MessageFormat} pattern; a catalogue test checks that every constant has its text and
- * that the placeholders match {@link #arity()}.
+ * that the pattern's {n} arguments match {@link #arity()}.
  */
 public enum Msg {
     /** {0} value. */

@@ -7,6 +7,7 @@ import org.finstack.core.InputException;
 import org.finstack.core.Msg;
 import org.junit.jupiter.api.Test;
 
+/** Invariants of the air-side surface record (the unit-cell area ratio by hand, refusals naming the field). */
 class AirSideSurfaceTest {
 
     private static InputException rejected(Runnable r) {

@@ -7,7 +7,10 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import java.io.IOException;
 import org.junit.jupiter.api.Test;
 
-/** The {@code bench} command runs a tiny configuration and reports its keys (not a timed test). */
+/**
+ * The {@code bench} command runs a tiny configuration and reports its keys (not a timed test);
+ * the invariant checked is the output contract, not a speed.
+ */
 class BenchCommandTest {
 
     @Test

@@ -16,7 +16,7 @@ import org.junit.jupiter.api.io.TempDir;
 /**
  * The {@code rate} command as a user meets it: the examples rate, JSON carries the documented
  * keys, and every kind of bad input ends with status 2 and one line naming the field (the
- * project's input contract; no stack trace, no NaN).
+ * project's input contract, an invariant: no stack trace, no NaN).
  */
 class RateCommandTest {
 

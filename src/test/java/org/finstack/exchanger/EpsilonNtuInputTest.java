@@ -8,7 +8,7 @@ import org.finstack.core.Msg;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.function.Executable;
 
-/** Bad inputs are rejected with the field and the reason, never answered with NaN. */
+/** Invariant of the input contract: bad inputs are rejected with the field and the reason, never answered with NaN. */
 class EpsilonNtuInputTest {
 
     private static InputException rejects(String field, Executable call) {

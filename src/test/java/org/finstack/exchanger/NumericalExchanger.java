@@ -5,6 +5,7 @@ package org.finstack.exchanger;
  * alone (no effectiveness relation is used): ODE integration for counterflow and parallel flow, a
  * cell-by-cell grid for single-pass crossflow, and a row-by-row march for counter-crossflow. All
  * work in scaled temperatures (hot inlet 1, cold inlet 0) and return q / (C<sub>min</sub> * 1).
+ * They are the independent reference the effectiveness relations are checked against.
  */
 final class NumericalExchanger {
 

@@ -4,7 +4,7 @@ import org.finstack.geometry.Arrangement;
 import org.finstack.geometry.CoilGeometry;
 import org.finstack.material.Materials;
 
-/** Coils used by several tests. */
+/** Coils used by several tests: the product issue's example condenser and Kays & London's reference surface 8.0-3/8T. */
 public final class Coils {
 
     private static final double INCH = 0.0254; // NIST SP 811, Appendix B.9: 1 in = 0.0254 m exactly

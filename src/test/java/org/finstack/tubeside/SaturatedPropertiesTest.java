@@ -6,6 +6,7 @@ import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import org.finstack.core.InputException;
 import org.junit.jupiter.api.Test;
 
+/** Invariants of the input record: every property finite and positive, below the critical pressure, refusals naming the field. */
 class SaturatedPropertiesTest {
 
     @Test

@@ -7,7 +7,7 @@ import org.finstack.core.InputException;
 import org.finstack.core.Msg;
 import org.junit.jupiter.api.Test;
 
-/** Checks of {@link PlateFinCell}. */
+/** Invariants of {@link PlateFinCell}: derived lengths from the cell's geometry and refusals naming the field. */
 class PlateFinCellTest {
 
     /** Derived lengths: collar radius and the distance to the nearest tube of the next row. */

@@ -8,7 +8,8 @@ import org.junit.jupiter.api.Test;
 /**
  * The bubble/dew pressure equation form of Lemmon (2003), with the R-410A bubble-point
  * coefficients (N = -7.2818, 2.5093, -3.2695, -2.8022; k = 1.0, 1.8, 2.4, 4.9; Tc = 344.494 K,
- * pc = 4.9012 MPa; the paper's values as carried by CoolProp 8.0.0's copy).
+ * pc = 4.9012 MPa; the paper's values as carried by CoolProp 8.0.0's copy). Its source is Lemmon
+ * (2003), Int. J. Thermophys. 24:991; the checks are the equation's own invariants.
  */
 class SaturationPressureEquationTest {
 
