@@ -29,6 +29,8 @@ import org.finstack.study.Option;
 import org.finstack.study.Overrides;
 import org.finstack.study.Project;
 import org.finstack.units.Dimension;
+import org.finstack.units.Quantities;
+import org.finstack.units.UnitSystem;
 
 /**
  * Reads and writes project files (format version 1):
@@ -43,7 +45,7 @@ import org.finstack.units.Dimension;
  * The {@code coil}, {@code air}, {@code refrigerant} and {@code fouling} objects are exactly those
  * of a case file ({@link CaseFiles}), so parts of any case file can be pasted in. Quantities are
  * read as "number unit" strings or bare SI numbers and written as "number unit" strings in SI
- * units with every digit a double carries, so a saved project reads back unchanged. Saving is
+ * units ({@link #quantity}), so a saved project reads back unchanged. Saving is
  * atomic and keeps the previous file as {@code NAME.bak} ({@link AtomicFiles}).
  */
 public final class ProjectFiles {
@@ -321,8 +323,10 @@ public final class ProjectFiles {
     }
 
     /**
-     * Writes an SI value as "number unit" in the SI unit of its dimension, with the shortest
-     * decimal that reads back as the same double (e.g. 0.00952 m as {@code "0.00952 m"}).
+     * Writes an SI value as "number unit": in the SI display unit of its dimension (mm, °C, kPa,
+     * ...) when the shortest decimal there reads back as the very same double, else in the base
+     * SI unit with the shortest decimal that reads back exactly. So 9.52 mm is written
+     * {@code "9.52 mm"}, and every saved value reads back unchanged.
      *
      * @param si  the value [SI unit of {@code dim}]
      * @param dim what it is
@@ -332,7 +336,17 @@ public final class ProjectFiles {
         if (!Double.isFinite(si)) {
             throw new InputException("value", Msg.NOT_A_NUMBER, si);
         }
-        String number = si == 0 ? "0" : BigDecimal.valueOf(si).stripTrailingZeros().toPlainString();
-        return number + " " + dim.siUnit();
+        String unit = Quantities.defaultUnit(dim, UnitSystem.SI);
+        if (!"-".equals(unit) && !(dim == Dimension.FIN_PITCH && si <= 0)) {
+            String text = decimal(Quantities.toUnit(si, dim, unit)) + " " + unit;
+            if (Quantities.parse("value", text, dim) == si) {
+                return text;
+            }
+        }
+        return decimal(si) + " " + dim.siUnit();
+    }
+
+    private static String decimal(double v) {
+        return v == 0 ? "0" : BigDecimal.valueOf(v).stripTrailingZeros().toPlainString();
     }
 }

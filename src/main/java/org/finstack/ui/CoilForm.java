@@ -70,6 +70,9 @@ final class CoilForm extends JPanel {
         coating.setName("coil.coating");
         arrangement.setName("coil.arrangement");
         finType.setName("coil.finType");
+        arrangement.setRenderer(Form.renderer(v -> Messages.get("coil.arrangement." + ((Arrangement) v).id())));
+        patterns.setRenderer(Form.renderer(v -> ((Patterns.Pattern) v).id() + "  \u2014  "
+                + ((Patterns.Pattern) v).description()));
         JButton apply = new JButton(Messages.get("coil.pattern.apply"));
         apply.setName("coil.pattern.apply");
         apply.addActionListener(e -> applyPattern());
@@ -168,6 +171,12 @@ final class CoilForm extends JPanel {
             arrangement.setSelectedItem(g.arrangement());
             finType.setSelectedItem(g.finType());
             fields.get("coil.coatingThickness").setEnabled(g.coating() != null);
+            for (int i = 0; i < patterns.getItemCount(); i++) {
+                Patterns.Pattern p = patterns.getItemAt(i);
+                if (Math.abs(p.tubeOuterDiameter() - g.tubeOuterDiameter()) < 1e-5) {
+                    patterns.setSelectedIndex(i);
+                }
+            }
             setValid(true, null);
         } finally {
             loading = false;

@@ -52,6 +52,7 @@ final class ConditionsForm extends JPanel {
         RefrigerantSafety.table().keySet().forEach(fluid::addItem);
         fluid.setName("refrigerant.fluid");
         duty.setName("refrigerant.duty");
+        duty.setRenderer(Form.renderer(v -> Messages.get("conditions.duty." + ((Duty) v).id())));
         byVelocity.setName("air.byVelocity");
         byFlow.setName("air.byFlow");
         ButtonGroup g = new ButtonGroup();

@@ -88,6 +88,18 @@ final class Form {
         return c;
     }
 
+    /**
+     * A list renderer that shows each item through a function (e.g. an enum's message text).
+     *
+     * @param text how to show an item
+     * @return the renderer
+     */
+    static javax.swing.ListCellRenderer<Object> renderer(java.util.function.Function<Object, String> text) {
+        javax.swing.DefaultListCellRenderer d = new javax.swing.DefaultListCellRenderer();
+        return (list, value, index, selected, focus) -> d.getListCellRendererComponent(list,
+                value == null ? "" : text.apply(value), index, selected, focus);
+    }
+
     /** Calls {@code r} on every change of a text component's document. */
     static void onEdit(JTextComponent t, Runnable r) {
         t.getDocument().addDocumentListener(new DocumentListener() {

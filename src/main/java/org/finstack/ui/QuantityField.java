@@ -23,6 +23,8 @@ public final class QuantityField extends JTextField {
     private double value;
     private UnitSystem units = UnitSystem.SI;
     private String error;
+    /** The text last written by {@link #show}; while it stands, {@link #value} is exact. */
+    private String shownText;
 
     /**
      * @param key       the field's path as in a case file (e.g. {@code coil.finPitch}); also its component name
@@ -66,6 +68,7 @@ public final class QuantityField extends JTextField {
             setText(text);
             setCaretPosition(0);
         }
+        shownText = text;
         clearError();
     }
 
@@ -100,9 +103,11 @@ public final class QuantityField extends JTextField {
     public void convert(UnitSystem u) {
         if (error == null) {
             try {
-                value = parse();
+                value = read();
                 units = u;
-                setText(text(value));
+                String text = text(value);
+                setText(text);
+                shownText = text;
                 setCaretPosition(0);
                 return;
             } catch (InputException e) {
@@ -121,12 +126,16 @@ public final class QuantityField extends JTextField {
     }
 
     /**
-     * Reads the text.
+     * Reads the text. While the text is the one last shown, the exact value shown is returned
+     * (the text is rounded to four significant figures), so showing and reading never drifts.
      *
      * @return the value [SI]
      * @throws InputException naming the field and the reason
      */
     public double read() {
+        if (shownText != null && shownText.equals(getText())) {
+            return value;
+        }
         double v = parse();
         value = v;
         return v;

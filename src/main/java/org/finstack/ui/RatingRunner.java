@@ -43,6 +43,7 @@ final class RatingRunner {
     private final AtomicInteger ratingsOnEdt = new AtomicInteger();
     private SwingWorker<List<Outcome>, Void> current;
     private int generation;
+    private boolean pending;
 
     RatingRunner(Listener listener) {
         this.listener = listener;
@@ -58,9 +59,9 @@ final class RatingRunner {
         return ratingsOnEdt.get();
     }
 
-    /** @return whether a rating is under way */
+    /** @return whether a rating is under way or its results are not yet delivered */
     boolean running() {
-        return current != null && !current.isDone();
+        return pending;
     }
 
     /**
@@ -99,6 +100,7 @@ final class RatingRunner {
                 if (mine != generation || isCancelled()) {
                     return;
                 }
+                pending = false;
                 listener.progress(false, 100);
                 try {
                     done.accept(get());
@@ -116,6 +118,7 @@ final class RatingRunner {
             }
         });
         current = w;
+        pending = true;
         listener.progress(true, 0);
         w.execute();
     }
@@ -134,5 +137,6 @@ final class RatingRunner {
             current.cancel(true);
             listener.progress(false, 0);
         }
+        pending = false;
     }
 }

@@ -41,6 +41,7 @@ final class ResultsPanel extends JPanel {
 
     private final Map<String, JLabel> values = new LinkedHashMap<>();
     private final JLabel headline = new JLabel(" ");
+    private final JLabel summary = new JLabel(" ");
     private final JTextArea warnings = new JTextArea(4, 40);
     private final JTextArea cautions = new JTextArea(3, 40);
     private final JPanel cautionBox = new JPanel(new BorderLayout());
@@ -52,6 +53,8 @@ final class ResultsPanel extends JPanel {
         super(new BorderLayout());
         setBorder(BorderFactory.createEmptyBorder(8, 10, 8, 10));
         headline.setName("results.headline");
+        summary.setName("summary");
+        summary.putClientProperty(FlatClientProperties.STYLE_CLASS, "h4");
         headline.putClientProperty(FlatClientProperties.STYLE_CLASS, "h3");
         JPanel grid = new JPanel(new GridLayout(0, 4, UIScale.scale(10), UIScale.scale(4)));
         for (String k : KEYS) {
@@ -111,6 +114,7 @@ final class ResultsPanel extends JPanel {
     void showInvalid(String reason) {
         rating = null;
         headline.setText(Messages.format("results.invalid", reason));
+        summary.setText(headline.getText());
         values.values().forEach(v -> v.setText("-"));
         bars.set(List.of());
         warnings.setText("");
@@ -144,6 +148,10 @@ final class ResultsPanel extends JPanel {
         }
         Rating r = rating;
         set("capacity", Quantities.format(r.capacity(), Dimension.HEAT_FLOW, u));
+        summary.setText(Messages.format("results.summary", Quantities.format(r.capacity(), Dimension.HEAT_FLOW, u),
+                Quantities.format(r.airOutletTemperature(), Dimension.TEMPERATURE, u),
+                Quantities.format(r.airPressureDrop(), Dimension.PRESSURE_DIFFERENCE, u),
+                r.warnings().isEmpty() ? "" : Messages.format("results.summaryWarnings", r.warnings().size())));
         set("airIn", Quantities.format(r.airInletTemperature(), Dimension.TEMPERATURE, u));
         set("airOut", Quantities.format(r.airOutletTemperature(), Dimension.TEMPERATURE, u));
         set("airPressureDrop", Quantities.format(r.airPressureDrop(), Dimension.PRESSURE_DIFFERENCE, u));
@@ -170,6 +178,11 @@ final class ResultsPanel extends JPanel {
 
     private void set(String key, String text) {
         values.get(key).setText(text);
+    }
+
+    /** @return the one-line summary of the rating shown, placed above the tabs by the window */
+    JLabel summary() {
+        return summary;
     }
 
     /** @return the rating shown, or null */

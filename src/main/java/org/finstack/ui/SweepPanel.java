@@ -88,10 +88,16 @@ final class SweepPanel extends JPanel {
             return Messages.get("sweep.parameter." + name());
         }
 
+        /** @return the name in running text (lower case) */
+        String inText() {
+            return Messages.get("sweep.parameterInText." + name());
+        }
+
         /** The default range [from, to] in the range fields' SI unit. */
         double[] defaults(CoilCase c) {
             return switch (this) {
-                case FIN_DENSITY -> new double[] {0.0254 / 4, 0.0254 / 16};
+                case FIN_DENSITY -> new double[] {Quantities.fromUnit(4, Dimension.FIN_PITCH, "fpi"),
+                    Quantities.fromUnit(16, Dimension.FIN_PITCH, "fpi")};
                 case ROWS -> new double[] {1, 8};
                 case FACE_VELOCITY -> new double[] {1.0, 4.0};
                 case TUBE_WALL -> new double[] {0.25e-3, 1.0e-3};
@@ -134,17 +140,21 @@ final class SweepPanel extends JPanel {
         cancel.setEnabled(false);
         savePng.setEnabled(false);
         saveSvg.setEnabled(false);
-        JPanel controls = new JPanel(new FlowLayout(FlowLayout.LEFT, UIScale.scale(6), UIScale.scale(4)));
-        controls.add(new JLabel(Messages.get("sweep.parameter")));
-        controls.add(choice);
-        controls.add(rangePanel);
-        controls.add(new JLabel(Messages.get("sweep.count")));
-        controls.add(count);
-        controls.add(run);
-        controls.add(cancel);
-        controls.add(progress);
-        controls.add(savePng);
-        controls.add(saveSvg);
+        JPanel first = new JPanel(new FlowLayout(FlowLayout.LEFT, UIScale.scale(6), UIScale.scale(4)));
+        first.add(new JLabel(Messages.get("sweep.parameter")));
+        first.add(choice);
+        first.add(rangePanel);
+        first.add(new JLabel(Messages.get("sweep.count")));
+        first.add(count);
+        JPanel second = new JPanel(new FlowLayout(FlowLayout.LEFT, UIScale.scale(6), UIScale.scale(4)));
+        second.add(run);
+        second.add(cancel);
+        second.add(progress);
+        second.add(savePng);
+        second.add(saveSvg);
+        JPanel controls = new JPanel(new java.awt.GridLayout(2, 1));
+        controls.add(first);
+        controls.add(second);
         add(controls, BorderLayout.NORTH);
         chartPanel.setName("sweep.chart");
         chartPanel.setMouseWheelEnabled(true);
@@ -370,7 +380,7 @@ final class SweepPanel extends JPanel {
             plot.setRenderer(1, lr);
             ((NumberAxis) plot.getRangeAxis()).setAutoRangeIncludesZero(false);
             right.setAutoRangeIncludesZero(false);
-            ch = new JFreeChart(Messages.format("sweep.title", c.toString()), JFreeChart.DEFAULT_TITLE_FONT, plot, true);
+            ch = new JFreeChart(Messages.format("sweep.title", c.inText()), JFreeChart.DEFAULT_TITLE_FONT, plot, true);
         } else {
             XYSeries cap = new XYSeries(capLabel);
             XYSeries dp = new XYSeries(dpLabel);
@@ -399,7 +409,7 @@ final class SweepPanel extends JPanel {
             r1.setSeriesStroke(0, new BasicStroke(2f, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND, 1f,
                     new float[] {6f, 4f}, 0f));
             plot.setRenderer(1, r1);
-            ch = new JFreeChart(Messages.format("sweep.title", c.toString()), JFreeChart.DEFAULT_TITLE_FONT, plot, true);
+            ch = new JFreeChart(Messages.format("sweep.title", c.inText()), JFreeChart.DEFAULT_TITLE_FONT, plot, true);
         }
         Color bg = Theme.color("Finstack.chart.background", Color.WHITE);
         Color fg = Theme.color("Finstack.chart.foreground", Color.DARK_GRAY);

@@ -170,8 +170,17 @@ public final class WorkbenchFrame extends JFrame {
         tabs.addTab(Messages.get("tab.results"), new JScrollPane(results));
         tabs.addTab(Messages.get("tab.compare"), compare);
         tabs.addTab(Messages.get("tab.sweeps"), sweep);
-        JSplitPane main = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, optionsPanel(), tabs);
+        JPanel right = new JPanel(new BorderLayout());
+        JPanel summaryRow = new JPanel(new BorderLayout());
+        summaryRow.setBorder(BorderFactory.createCompoundBorder(BorderFactory.createMatteBorder(0, 0, 1, 0,
+                Theme.color("Finstack.summary.rule", java.awt.Color.LIGHT_GRAY)),
+                BorderFactory.createEmptyBorder(6, 10, 6, 10)));
+        summaryRow.add(results.summary(), BorderLayout.CENTER);
+        right.add(summaryRow, BorderLayout.NORTH);
+        right.add(tabs, BorderLayout.CENTER);
+        JSplitPane main = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, optionsPanel(), right);
         main.setResizeWeight(0.0);
+        main.setDividerLocation(UIScale.scale(270));
         content.add(main, BorderLayout.CENTER);
         content.add(statusBar(), BorderLayout.SOUTH);
         setContentPane(content);
@@ -279,6 +288,7 @@ public final class WorkbenchFrame extends JFrame {
         JComboBox<CoilModel> models = new JComboBox<>(CoilModel.values());
         models.setName("toolbar.model");
         models.setToolTipText(Messages.get("toolbar.model.tip"));
+        models.setRenderer(Form.renderer(v -> Messages.get("toolbar.model." + ((CoilModel) v).id())));
         models.setMaximumSize(models.getPreferredSize());
         models.addActionListener(e -> model.model((CoilModel) models.getSelectedItem()));
         t.add(models);

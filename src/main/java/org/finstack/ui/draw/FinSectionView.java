@@ -67,8 +67,8 @@ public final class FinSectionView {
             double ro = coil.tubeOuterDiameter() / 2 * s;
             double ri = coil.insideDiameter() / 2 * s;
             double rc = coil.collarDiameter() / 2 * s;
-            double x0 = area.getX() + MARGIN;
             double width = PITCHES * p;
+            double x0 = area.getX() + Math.max(MARGIN, (area.getWidth() - width - 110) / 2);
             double cy = area.getY() + MARGIN + 18 + 0.95 * coil.collarDiameter() * s;
             double finReach = 0.95 * coil.collarDiameter() * s;
             // tube wall, above and below the axis

@@ -128,7 +128,9 @@ public final class TubeSheetView {
             arrow(g2, plate, palette, air);
             g2.setColor(palette.text());
             g2.setFont(g2.getFont().deriveFont(Font.PLAIN, 12f));
-            g2.drawString(caption, (float) plate.getX(), (float) (plate.getMaxY() + 16));
+            float w = (float) g2.getFontMetrics().getStringBounds(caption, g2).getWidth();
+            float x = (float) Math.max(area.getX() + 4, Math.min(plate.getCenterX() - w / 2, area.getMaxX() - w - 4));
+            g2.drawString(caption, x, (float) (plate.getMaxY() + 16));
         } finally {
             g2.dispose();
         }
