@@ -138,6 +138,7 @@ public final class QuantityField extends JTextField {
         }
         double v = parse();
         value = v;
+        shownText = null;
         return v;
     }
 

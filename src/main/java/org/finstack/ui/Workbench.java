@@ -19,7 +19,7 @@ import org.finstack.study.Project;
 public final class Workbench {
 
     /** Class-path location of the demo project (built from the examples). */
-    public static final String DEMO_RESOURCE = "/examples/otterby-condenser-options.finstack.json";
+    public static final String DEMO_RESOURCE = "/examples/projects/otterby-condenser-options.finstack.json";
 
     /** Returned by {@link #start} when the window is open and the program must keep running. */
     public static final int STAYS_OPEN = -1;

@@ -27,7 +27,7 @@ import org.junit.jupiter.api.io.TempDir;
 class ProjectFilesTest {
 
     private static final Path EXAMPLES = Path.of("examples");
-    private static final Path DEMO = EXAMPLES.resolve("otterby-condenser-options.finstack.json");
+    private static final Path DEMO = EXAMPLES.resolve("projects").resolve("otterby-condenser-options.finstack.json");
 
     @TempDir
     Path dir;

@@ -133,6 +133,7 @@ class WorkbenchGuiTest {
 
     @Test
     void switchingToUsUnitsConvertsFieldsAndResults() throws IOException {
+        double diameter = onEdt(() -> frame.model().option().coil().tubeOuterDiameter());
         window.toggleButton("units.US").click();
         // 9.52 mm / 0.0254 m/in (NIST SP 811, B.9: 1 in = 0.0254 m exactly) = 0.374803 in
         window.textBox("coil.tubeOuterDiameter").requireText("0.3748 in");
@@ -144,7 +145,8 @@ class WorkbenchGuiTest {
         window.toggleButton("units.SI").click();
         window.tabbedPane("tabs").selectTab(0);
         window.textBox("coil.tubeOuterDiameter").requireText("9.52 mm");
-        assertThat(onEdt(() -> frame.model().option().coil().tubeOuterDiameter())).isEqualTo(0.00952);
+        // switching back and forth changes what is shown, never the value kept
+        assertThat(onEdt(() -> frame.model().option().coil().tubeOuterDiameter())).isEqualTo(diameter);
     }
 
     @Test
@@ -216,8 +218,7 @@ class WorkbenchGuiTest {
     @Test
     void aFlammableHighPressureRefrigerantShowsTheCautions() throws IOException {
         window.tabbedPane("tabs").selectTab(1);
-        window.comboBox("refrigerant.fluid").replaceText("R-32");
-        window.comboBox("refrigerant.fluid").pressAndReleaseKeys(java.awt.event.KeyEvent.VK_ENTER);
+        window.comboBox("refrigerant.fluid").selectItem("R-32");
         awaitCondition("R-32 set", () -> frame.model().project().conditions().refrigerant().fluid().equals("R-32"));
         awaitRated();
         awaitCondition("cautions shown", () -> frame.results().hazards().contains(RefrigerantSafety.Hazard.FLAMMABLE));
