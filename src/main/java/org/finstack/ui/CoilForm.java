@@ -45,6 +45,7 @@ final class CoilForm extends JPanel {
     private final Timer commitTimer;
     private boolean loading;
     private boolean valid = true;
+    private String message;
 
     CoilForm(ProjectModel model, Runnable validityChanged) {
         super(new BorderLayout());
@@ -70,9 +71,11 @@ final class CoilForm extends JPanel {
         coating.setName("coil.coating");
         arrangement.setName("coil.arrangement");
         finType.setName("coil.finType");
-        arrangement.setRenderer(Form.renderer(v -> Messages.get("coil.arrangement." + ((Arrangement) v).id())));
-        patterns.setRenderer(Form.renderer(v -> ((Patterns.Pattern) v).id() + "  \u2014  "
-                + ((Patterns.Pattern) v).description()));
+        arrangement.setRenderer(Form.renderer(v -> ((Arrangement) v).id(),
+                v -> Messages.get("coil.arrangement." + ((Arrangement) v).id())));
+        patterns.setRenderer(Form.renderer(v -> ((Patterns.Pattern) v).id(), v -> ((Patterns.Pattern) v).id()
+                + "  \u2014  " + ((Patterns.Pattern) v).description()));
+        patterns.setPrototypeDisplayValue(patterns.getItemAt(0));
         JButton apply = new JButton(Messages.get("coil.pattern.apply"));
         apply.setName("coil.pattern.apply");
         apply.addActionListener(e -> applyPattern());
@@ -146,6 +149,11 @@ final class CoilForm extends JPanel {
     /** @return whether every entry is valid */
     boolean isValidInput() {
         return valid;
+    }
+
+    /** @return the reason the form is refused, or null */
+    String errorMessage() {
+        return valid ? null : message;
     }
 
     /** Shows the selected option's coil. */
@@ -270,10 +278,12 @@ final class CoilForm extends JPanel {
         return fields.get(key).read();
     }
 
-    private void setValid(boolean v, String message) {
-        status.setText(message == null ? " " : "\u26a0 " + message);
-        if (v != valid) {
-            valid = v;
+    private void setValid(boolean v, String text) {
+        boolean changed = v != valid || !Objects.equals(text, message);
+        message = text;
+        status.setText(text == null ? " " : "\u26a0 " + text);
+        valid = v;
+        if (changed) {
             validityChanged.run();
         }
     }

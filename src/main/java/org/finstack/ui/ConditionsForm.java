@@ -41,6 +41,7 @@ final class ConditionsForm extends JPanel {
     private final Timer commitTimer;
     private boolean loading;
     private boolean valid = true;
+    private String message;
 
     ConditionsForm(ProjectModel model, Runnable validityChanged) {
         super(new BorderLayout());
@@ -52,7 +53,7 @@ final class ConditionsForm extends JPanel {
         RefrigerantSafety.table().keySet().forEach(fluid::addItem);
         fluid.setName("refrigerant.fluid");
         duty.setName("refrigerant.duty");
-        duty.setRenderer(Form.renderer(v -> Messages.get("conditions.duty." + ((Duty) v).id())));
+        duty.setRenderer(Form.renderer(v -> ((Duty) v).id(), v -> Messages.get("conditions.duty." + ((Duty) v).id())));
         byVelocity.setName("air.byVelocity");
         byFlow.setName("air.byFlow");
         ButtonGroup g = new ButtonGroup();
@@ -136,6 +137,11 @@ final class ConditionsForm extends JPanel {
     /** @return whether every entry is valid */
     boolean isValidInput() {
         return valid;
+    }
+
+    /** @return the reason the form is refused, or null */
+    String errorMessage() {
+        return valid ? null : message;
     }
 
     /** Shows the project's conditions. */
@@ -248,10 +254,12 @@ final class ConditionsForm extends JPanel {
         return fields.get(key).read();
     }
 
-    private void setValid(boolean v, String message) {
-        status.setText(message == null ? " " : "\u26a0 " + message);
-        if (v != valid) {
-            valid = v;
+    private void setValid(boolean v, String text) {
+        boolean changed = v != valid || !Objects.equals(text, message);
+        message = text;
+        status.setText(text == null ? " " : "\u26a0 " + text);
+        valid = v;
+        if (changed) {
             validityChanged.run();
         }
     }

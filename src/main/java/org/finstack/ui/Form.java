@@ -95,9 +95,21 @@ final class Form {
      * @return the renderer
      */
     static javax.swing.ListCellRenderer<Object> renderer(java.util.function.Function<Object, String> text) {
+        return renderer(text, text);
+    }
+
+    /**
+     * A list renderer with a short text for the closed combo box and a longer one in its list.
+     *
+     * @param shown  how to show the chosen item in the closed box
+     * @param listed how to show an item in the open list
+     * @return the renderer
+     */
+    static javax.swing.ListCellRenderer<Object> renderer(java.util.function.Function<Object, String> shown,
+            java.util.function.Function<Object, String> listed) {
         javax.swing.DefaultListCellRenderer d = new javax.swing.DefaultListCellRenderer();
         return (list, value, index, selected, focus) -> d.getListCellRendererComponent(list,
-                value == null ? "" : text.apply(value), index, selected, focus);
+                value == null ? "" : (index < 0 ? shown : listed).apply(value), index, selected, focus);
     }
 
     /** Calls {@code r} on every change of a text component's document. */

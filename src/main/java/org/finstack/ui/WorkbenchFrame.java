@@ -421,16 +421,21 @@ public final class WorkbenchFrame extends JFrame {
         if (!coilForm.isValidInput() || !conditionsForm.isValidInput()) {
             rateTimer.stop();
             runner.cancel();
-            results.showInvalid(Messages.get("results.fixFields"));
+            results.showInvalid(inputError());
         } else {
             scheduleRate();
         }
     }
 
+    private String inputError() {
+        String e = coilForm.errorMessage() != null ? coilForm.errorMessage() : conditionsForm.errorMessage();
+        return e == null ? Messages.get("results.fixFields") : Messages.format("results.fixThis", e);
+    }
+
     /** Re-rates after a pause (one-shot timer), unless an entry is invalid. */
     private void scheduleRate() {
         if (!coilForm.isValidInput() || !conditionsForm.isValidInput()) {
-            results.showInvalid(Messages.get("results.fixFields"));
+            results.showInvalid(inputError());
             return;
         }
         rateTimer.restart();
@@ -440,7 +445,7 @@ public final class WorkbenchFrame extends JFrame {
     void rateNow() {
         rateTimer.stop();
         if (!coilForm.isValidInput() || !conditionsForm.isValidInput()) {
-            results.showInvalid(Messages.get("results.fixFields"));
+            results.showInvalid(inputError());
             return;
         }
         results.headline(Messages.get("status.rating"));
