@@ -116,6 +116,8 @@ final class CoilForm extends JPanel {
         f.field(Messages.get("coil.coatingThickness"), q("coil.coatingThickness", Dimension.LENGTH, false),
                 Messages.get("coil.coatingThickness.help"));
         status.setName("coil.status");
+        status.setPreferredSize(new java.awt.Dimension(com.formdev.flatlaf.util.UIScale.scale(120),
+                status.getPreferredSize().height));
         status.setForeground(Theme.color("Finstack.error", status.getForeground()));
         f.wide(status);
         add(f.end(), BorderLayout.CENTER);
@@ -282,6 +284,7 @@ final class CoilForm extends JPanel {
         boolean changed = v != valid || !Objects.equals(text, message);
         message = text;
         status.setText(text == null ? " " : "\u26a0 " + text);
+        status.setToolTipText(text);
         valid = v;
         if (changed) {
             validityChanged.run();

@@ -99,6 +99,8 @@ final class ConditionsForm extends JPanel {
         contactNote.setColumns(30);
         f.wide(contactNote);
         status.setName("conditions.status");
+        status.setPreferredSize(new java.awt.Dimension(com.formdev.flatlaf.util.UIScale.scale(120),
+                status.getPreferredSize().height));
         status.setForeground(Theme.color("Finstack.error", status.getForeground()));
         f.wide(status);
         add(f.end(), BorderLayout.CENTER);
@@ -258,6 +260,7 @@ final class ConditionsForm extends JPanel {
         boolean changed = v != valid || !Objects.equals(text, message);
         message = text;
         status.setText(text == null ? " " : "\u26a0 " + text);
+        status.setToolTipText(text);
         valid = v;
         if (changed) {
             validityChanged.run();

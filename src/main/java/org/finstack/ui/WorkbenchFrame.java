@@ -96,6 +96,8 @@ public final class WorkbenchFrame extends JFrame {
     private final List<Action> actions = new ArrayList<>();
     private List<RatingRunner.Outcome> outcomes = List.of();
     private boolean syncingList;
+    /** A re-rate is due: set when the timer is started, cleared when the rating is started. */
+    private boolean ratePending;
 
     private final Action openAction;
     private final Action saveAction;
@@ -420,6 +422,7 @@ public final class WorkbenchFrame extends JFrame {
     private void validityChanged() {
         if (!coilForm.isValidInput() || !conditionsForm.isValidInput()) {
             rateTimer.stop();
+            ratePending = false;
             runner.cancel();
             results.showInvalid(inputError());
         } else {
@@ -438,12 +441,14 @@ public final class WorkbenchFrame extends JFrame {
             results.showInvalid(inputError());
             return;
         }
+        ratePending = true;
         rateTimer.restart();
     }
 
     /** Rates every option now, in the background. */
     void rateNow() {
         rateTimer.stop();
+        ratePending = false;
         if (!coilForm.isValidInput() || !conditionsForm.isValidInput()) {
             results.showInvalid(inputError());
             return;
@@ -759,7 +764,7 @@ public final class WorkbenchFrame extends JFrame {
 
     /** @return whether a rating is waiting on the timer or running */
     boolean busy() {
-        return rateTimer.isRunning() || runner.running();
+        return ratePending || runner.running();
     }
 
     /** @return the actions, for the shortcut test */
