@@ -1,23 +1,30 @@
 package org.finstack.cli;
 
 import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.concurrent.Callable;
 import org.finstack.core.FinstackException;
+import org.finstack.ui.Workbench;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 
 /**
- * The {@code finstack} command: rates coils from case files. Errors in the input print one line
+ * The {@code finstack} command: rates coils from case files ({@code rate}) and, with no command
+ * or with {@code workbench}, opens the desktop workbench. Errors in the input print one line
  * naming the field and the reason and exit with status 2; no stack trace reaches the user.
  */
 @Command(name = "finstack", mixinStandardHelpOptions = true, versionProvider = Main.Version.class,
         description = "Rates and compares plate-fin-and-tube refrigeration coils.",
-        subcommands = {RateCommand.class, AirCommand.class, FluidCommand.class, BenchCommand.class})
-public final class Main implements Runnable {
+        subcommands = {RateCommand.class, AirCommand.class, FluidCommand.class, BenchCommand.class,
+            Main.WorkbenchCommand.class})
+public final class Main implements Callable<Integer> {
 
     /** Exit status for bad input. */
     public static final int EXIT_INPUT = 2;
     /** Exit status for an internal failure. */
     public static final int EXIT_INTERNAL = 1;
+    /** Returned when the workbench window opened: the program keeps running until it is closed. */
+    static final int STAYS_OPEN = Workbench.STAYS_OPEN;
 
     @CommandLine.Spec
     private CommandLine.Model.CommandSpec spec;
@@ -26,7 +33,10 @@ public final class Main implements Runnable {
      * @param args command-line arguments
      */
     public static void main(String[] args) {
-        System.exit(run(args, new PrintWriter(System.out, true), new PrintWriter(System.err, true)));
+        int code = run(args, new PrintWriter(System.out, true), new PrintWriter(System.err, true));
+        if (code != STAYS_OPEN) {
+            System.exit(code);
+        }
     }
 
     /**
@@ -62,12 +72,40 @@ public final class Main implements Runnable {
         return code;
     }
 
+    /** With no command, opens the workbench on the demo project (or says there is no display). */
     @Override
-    public void run() {
-        PrintWriter out = spec.commandLine().getOut();
-        out.println("Finstack rates plate-fin-and-tube coils. Rate a case file with:");
-        out.println("  java -jar target/finstack.jar rate examples/<case>.json");
-        out.println("See 'java -jar target/finstack.jar --help' for every command.");
+    public Integer call() {
+        return startWorkbench(null, spec.commandLine().getOut(), spec.commandLine().getErr());
+    }
+
+    /**
+     * Starts the workbench through its entry class.
+     *
+     * @param project a project file, or null for the demo project
+     * @param out     standard output
+     * @param err     standard error
+     * @return the workbench's status: {@link #STAYS_OPEN} while its window is open
+     */
+    static int startWorkbench(Path project, PrintWriter out, PrintWriter err) {
+        return Workbench.start(project, out, err);
+    }
+
+    /** {@code finstack workbench [PROJECT]}: opens the desktop workbench. */
+    @Command(name = "workbench", mixinStandardHelpOptions = true,
+            description = "Opens the desktop workbench on a project file, or on the demo project.")
+    static final class WorkbenchCommand implements Callable<Integer> {
+
+        @CommandLine.Spec
+        private CommandLine.Model.CommandSpec spec;
+
+        @CommandLine.Parameters(index = "0", arity = "0..1", paramLabel = "PROJECT",
+                description = "project file (*.finstack.json); the demo project when omitted")
+        private Path project;
+
+        @Override
+        public Integer call() {
+            return startWorkbench(project, spec.commandLine().getOut(), spec.commandLine().getErr());
+        }
     }
 
     /** Reports the version from the jar's manifest. */

@@ -1,0 +1,315 @@
+package org.finstack.ui;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.junit.jupiter.api.Assumptions.assumeFalse;
+
+import java.awt.Graphics2D;
+import java.awt.GraphicsEnvironment;
+import java.awt.image.BufferedImage;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.UUID;
+import java.util.concurrent.Callable;
+import java.util.prefs.BackingStoreException;
+import java.util.prefs.Preferences;
+import javax.imageio.ImageIO;
+import javax.swing.JTable;
+import org.assertj.swing.edt.FailOnThreadViolationRepaintManager;
+import org.assertj.swing.edt.GuiActionRunner;
+import org.assertj.swing.fixture.FrameFixture;
+import org.assertj.swing.timing.Condition;
+import org.assertj.swing.timing.Pause;
+import org.assertj.swing.timing.Timeout;
+import org.finstack.coil.CoilCase;
+import org.finstack.coil.IsothermalCoilModel;
+import org.finstack.coil.Rating;
+import org.finstack.io.AtomicFiles;
+import org.finstack.io.CaseFiles;
+import org.finstack.io.ProjectFiles;
+import org.finstack.study.Project;
+import org.finstack.study.Sweep;
+import org.finstack.units.Dimension;
+import org.finstack.units.Quantities;
+import org.finstack.units.UnitSystem;
+import org.junit.jupiter.api.AfterEach;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * Drives the workbench as a user would (AssertJ Swing, from JUnit 5): the demo project opens and
+ * rates, a field edit re-rates, a bad entry is marked and not rated, units switch, a project is
+ * saved and reopened, options are compared and duplicated, a sweep is plotted and saved. The
+ * reference for every capacity is {@link IsothermalCoilModel} run directly on the same case read
+ * from the example case files. A repaint manager fails any Swing access off the event thread,
+ * and every test checks that no rating ran on the event thread. Skipped without a display (CI
+ * runs it under Xvfb). Screenshots of the main states go to target/screenshots.
+ */
+class WorkbenchGuiTest {
+
+    private static final Path EXAMPLES = Path.of("examples");
+    private static final Path SHOTS = Path.of("target", "screenshots");
+
+    @TempDir
+    Path dir;
+
+    private Preferences node;
+    private WorkbenchFrame frame;
+    private FrameFixture window;
+
+    @BeforeAll
+    static void needsDisplay() {
+        assumeFalse(GraphicsEnvironment.isHeadless(), "no display: GUI tests skipped (CI runs them under Xvfb)");
+        FailOnThreadViolationRepaintManager.install();
+    }
+
+    @BeforeEach
+    void open() {
+        node = Preferences.userRoot().node("org/finstack/test-" + UUID.randomUUID());
+        UiPreferences prefs = new UiPreferences(node);
+        frame = GuiActionRunner.execute(() -> Workbench.open(Workbench.demo(), null, prefs, false));
+        window = new FrameFixture(frame);
+        window.resizeTo(new java.awt.Dimension(1280, 820));
+        awaitRated();
+    }
+
+    @AfterEach
+    void close() throws BackingStoreException {
+        if (window != null) {
+            assertThat(onEdt(() -> frame.runner().ratingsOnEventThread())).as("ratings run on the event thread")
+                    .isZero();
+            window.cleanUp();
+        }
+        if (node != null) {
+            node.removeNode();
+        }
+    }
+
+    @Test
+    void demoOpensAndShowsTheExistingCondensersCapacity() throws IOException {
+        Rating expected = new IsothermalCoilModel().rate(CaseFiles.read(EXAMPLES.resolve("otterby-rooftop-condenser.json")));
+        shot("01-coil-form-and-drawing");
+        window.tabbedPane("tabs").selectTab(2);
+        window.label("results.capacity").requireText(Quantities.format(expected.capacity(), Dimension.HEAT_FLOW,
+                UnitSystem.SI));
+        assertThat(onEdt(() -> frame.results().rating().capacity())).isEqualTo(expected.capacity());
+        assertThat(onEdt(() -> frame.runner().ratings())).isPositive();
+        shot("02-results");
+    }
+
+    @Test
+    void editingRowsReratesToTheModelsValue() throws IOException {
+        window.textBox("coil.rows").deleteText().enterText("4");
+        awaitCondition("rows edited", () -> frame.model().option().coil().rows() == 4);
+        awaitRated();
+        CoilCase c = CaseFiles.read(EXAMPLES.resolve("otterby-rooftop-condenser.json"));
+        Rating expected = new IsothermalCoilModel().rate(c.withCoil(c.coil().withRows(4)));
+        awaitCondition("rated with 4 rows", () -> frame.results().rating() != null
+                && frame.results().rating().capacity() == expected.capacity());
+        window.tabbedPane("tabs").selectTab(2);
+        window.label("results.capacity").requireText(Quantities.format(expected.capacity(), Dimension.HEAT_FLOW,
+                UnitSystem.SI));
+    }
+
+    @Test
+    void anImpossibleFinPitchIsMarkedAndNothingIsRated() throws IOException {
+        int before = onEdt(() -> frame.runner().ratings());
+        window.textBox("coil.finPitch").setText("0.05 mm");
+        awaitCondition("field marked", () -> frame.coilForm().field("coil.finPitch").error() != null);
+        assertThat(onEdt(() -> frame.coilForm().field("coil.finPitch").error())).contains("coil.finPitch")
+                .contains("fin thickness");
+        window.tabbedPane("tabs").selectTab(0);
+        shot("03-invalid-entry");
+        Pause.pause(700);
+        assertThat(onEdt(() -> frame.runner().ratings())).isEqualTo(before);
+        window.label("summary").requireText(java.util.regex.Pattern.compile("Not rated.*"));
+        window.textBox("coil.finPitch").setText("2.1 mm");
+        awaitCondition("field fixed", () -> frame.coilForm().field("coil.finPitch").error() == null);
+        awaitRated();
+    }
+
+    @Test
+    void switchingToUsUnitsConvertsFieldsAndResults() throws IOException {
+        double diameter = onEdt(() -> frame.model().option().coil().tubeOuterDiameter());
+        window.toggleButton("units.US").click();
+        // 9.52 mm / 0.0254 m/in (NIST SP 811, B.9: 1 in = 0.0254 m exactly) = 0.374803 in
+        window.textBox("coil.tubeOuterDiameter").requireText("0.3748 in");
+        // 2.1 mm fin pitch: 25.4 / 2.1 = 12.095 fins per inch
+        window.textBox("coil.finPitch").requireText("12.1 fpi");
+        shot("04-us-units");
+        window.tabbedPane("tabs").selectTab(2);
+        window.label("results.capacity").requireText(java.util.regex.Pattern.compile(".* Btu/h"));
+        window.toggleButton("units.SI").click();
+        window.tabbedPane("tabs").selectTab(0);
+        window.textBox("coil.tubeOuterDiameter").requireText("9.52 mm");
+        // switching back and forth changes what is shown, never the value kept
+        assertThat(onEdt(() -> frame.model().option().coil().tubeOuterDiameter())).isEqualTo(diameter);
+    }
+
+    @Test
+    void savedProjectReopensUnchangedAndKeepsTheOldFileAsBak() throws IOException {
+        Path file = dir.resolve("c2.finstack.json");
+        assertThat(onEdt(() -> frame.saveTo(file))).isTrue();
+        Project saved = onEdt(() -> frame.model().project());
+        assertThat(ProjectFiles.read(file)).isEqualTo(saved);
+        window.textBox("coil.finnedLength").setText("1000 mm");
+        awaitCondition("edited", () -> frame.model().option().coil().finnedLength() == 1.0);
+        assertThat(onEdt(() -> frame.saveTo(file))).isTrue();
+        assertThat(ProjectFiles.read(AtomicFiles.backupOf(file))).isEqualTo(saved);
+        Project edited = onEdt(() -> frame.model().project());
+        assertThat(onEdt(() -> frame.openProject(null))).isTrue();
+        assertThat(onEdt(() -> frame.openProject(file))).isTrue();
+        assertThat(onEdt(() -> frame.model().project())).isEqualTo(edited);
+        awaitRated();
+        window.textBox("coil.finnedLength").requireText("1000 mm");
+    }
+
+    @Test
+    void sideBySideMarksTheCandidatesDifferences() throws IOException {
+        window.tabbedPane("tabs").selectTab(3);
+        JTable table = window.table("compare.table").target();
+        Rating existing = new IsothermalCoilModel().rate(CaseFiles.read(EXAMPLES.resolve("otterby-rooftop-condenser.json")));
+        Rating candidate = new IsothermalCoilModel().rate(
+                CaseFiles.read(EXAMPLES.resolve("otterby-condenser-candidate-4row.json")));
+        int capacityRow = onEdt(() -> rowOf(table, "Capacity"));
+        int rowsRow = onEdt(() -> rowOf(table, "Rows"));
+        int diameterRow = onEdt(() -> rowOf(table, "Tube diameter"));
+        ComparePanel.Cell ref = onEdt(() -> (ComparePanel.Cell) table.getValueAt(capacityRow, 1));
+        ComparePanel.Cell cand = onEdt(() -> (ComparePanel.Cell) table.getValueAt(capacityRow, 2));
+        assertThat(ref.text()).isEqualTo(Quantities.format(existing.capacity(), Dimension.HEAT_FLOW, UnitSystem.SI));
+        assertThat(ref.changed()).isFalse();
+        assertThat(cand.text()).startsWith(Quantities.format(candidate.capacity(), Dimension.HEAT_FLOW, UnitSystem.SI));
+        assertThat(cand.changed()).isTrue();
+        assertThat(onEdt(() -> ((ComparePanel.Cell) table.getValueAt(rowsRow, 2)).changed())).isTrue();
+        assertThat(onEdt(() -> ((ComparePanel.Cell) table.getValueAt(diameterRow, 2)).changed())).isFalse();
+        shot("05-side-by-side");
+    }
+
+    @Test
+    void duplicateUndoAndRedoAnOption() {
+        window.button("options.duplicate").click();
+        awaitCondition("duplicated", () -> frame.model().project().allOptions().size() == 3);
+        assertThat(onEdt(() -> frame.model().selected())).isEqualTo(2);
+        assertThat(onEdt(() -> frame.model().option().name())).endsWith("(copy)");
+        window.button("toolbar.undo").click();
+        awaitCondition("undone", () -> frame.model().project().allOptions().size() == 2);
+        window.button("toolbar.redo").click();
+        awaitCondition("redone", () -> frame.model().project().allOptions().size() == 3);
+        awaitRated();
+        assertThat(onEdt(() -> frame.outcomes().size())).isEqualTo(3);
+    }
+
+    @Test
+    void aCaseFileAddedAsAnOptionKeepsItsOwnConditions() throws IOException {
+        Path cooler = EXAMPLES.resolve("otterby-cooler-evaporator.json");
+        assertThat(onEdt(() -> frame.importCase(cooler))).isTrue();
+        awaitRated();
+        Rating expected = new IsothermalCoilModel().rate(CaseFiles.read(cooler));
+        awaitCondition("cooler rated", () -> frame.results().rating() != null
+                && frame.results().rating().capacity() == expected.capacity());
+        window.tabbedPane("tabs").selectTab(2);
+        window.label("results.capacity").requireText(Quantities.format(expected.capacity(), Dimension.HEAT_FLOW,
+                UnitSystem.SI));
+    }
+
+    @Test
+    void aFlammableHighPressureRefrigerantShowsTheCautions() throws IOException {
+        window.tabbedPane("tabs").selectTab(1);
+        window.comboBox("refrigerant.fluid").selectItem("R-32");
+        awaitCondition("R-32 set", () -> frame.model().project().conditions().refrigerant().fluid().equals("R-32"));
+        awaitRated();
+        awaitCondition("cautions shown", () -> frame.results().hazards().contains(RefrigerantSafety.Hazard.FLAMMABLE));
+        window.tabbedPane("tabs").selectTab(2);
+        window.textBox("results.cautions").requireVisible();
+        assertThat(window.textBox("results.cautions").text()).contains("High pressure").contains("Flammable")
+                .contains("work at height");
+        // the isothermal model does not use the refrigerant's name: re-reading the shown (rounded)
+        // conditions must not have moved the capacity
+        Rating expected = new IsothermalCoilModel().rate(CaseFiles.read(EXAMPLES.resolve("otterby-rooftop-condenser.json")));
+        assertThat(onEdt(() -> frame.results().rating().capacity())).isEqualTo(expected.capacity());
+        shot("06-cautions");
+    }
+
+    @Test
+    void finDensitySweepIsPlottedAndSavedAsPngAndSvg() throws IOException {
+        window.tabbedPane("tabs").selectTab(4);
+        window.comboBox("sweep.parameter").selectItem(0);
+        window.button("sweep.run").click();
+        awaitCondition("sweep done", () -> frame.sweep().points() != null && !frame.sweep().running());
+        List<Sweep.Point> points = onEdt(() -> frame.sweep().points());
+        assertThat(points).hasSize(9).allMatch(Sweep.Point::rated);
+        for (int i = 1; i < points.size(); i++) {
+            // more fins per metre: more surface, more capacity and more pressure drop
+            assertThat(points.get(i).rating().capacity()).isGreaterThan(points.get(i - 1).rating().capacity());
+            assertThat(points.get(i).rating().airPressureDrop())
+                    .isGreaterThan(points.get(i - 1).rating().airPressureDrop());
+        }
+        Path png = dir.resolve("sweep.png");
+        Path svg = dir.resolve("sweep.svg");
+        GuiActionRunner.execute(() -> {
+            frame.sweep().writePng(png);
+            frame.sweep().writeSvg(svg);
+            return null;
+        });
+        assertThat(ImageIO.read(png.toFile()).getWidth()).isEqualTo(900);
+        assertThat(Files.readString(svg)).contains("<svg").contains("Capacity");
+        shot("07-sweep");
+    }
+
+    @Test
+    void darkThemeKeepsEverythingReadable() {
+        window.menuItem("theme.DARK").click();
+        awaitCondition("dark", () -> javax.swing.UIManager.getLookAndFeel() instanceof FinstackDarkLaf);
+        shot("08-dark-theme");
+        window.menuItem("theme.LIGHT").click();
+        awaitCondition("light", () -> javax.swing.UIManager.getLookAndFeel() instanceof FinstackLightLaf);
+    }
+
+    // --- helpers ---
+
+    private static int rowOf(JTable t, String label) {
+        for (int r = 0; r < t.getRowCount(); r++) {
+            if (t.getValueAt(r, 0).toString().equals(label)) {
+                return r;
+            }
+        }
+        throw new AssertionError("no row " + label);
+    }
+
+    private void awaitRated() {
+        awaitCondition("rating finished", () -> !frame.busy() && frame.results().rating() != null);
+    }
+
+    private void awaitCondition(String what, Callable<Boolean> test) {
+        Pause.pause(new Condition(what) {
+            @Override
+            public boolean test() {
+                return onEdt(test);
+            }
+        }, Timeout.timeout(15_000));
+    }
+
+    private static <T> T onEdt(Callable<T> c) {
+        return GuiActionRunner.execute(c);
+    }
+
+    private void shot(String name) {
+        try {
+            Files.createDirectories(SHOTS);
+            BufferedImage img = GuiActionRunner.execute(() -> {
+                BufferedImage i = new BufferedImage(frame.getRootPane().getWidth(), frame.getRootPane().getHeight(),
+                        BufferedImage.TYPE_INT_RGB);
+                Graphics2D g = i.createGraphics();
+                frame.getRootPane().paint(g);
+                g.dispose();
+                return i;
+            });
+            ImageIO.write(img, "png", SHOTS.resolve(name + ".png").toFile());
+        } catch (IOException e) {
+            throw new AssertionError("cannot write screenshot " + name, e);
+        }
+    }
+}
