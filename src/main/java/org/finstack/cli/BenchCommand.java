@@ -8,6 +8,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
+import org.finstack.coil.CoilBenchmark;
 import org.finstack.core.InputException;
 import org.finstack.fluid.table.TableBenchmark;
 import picocli.CommandLine.Command;
@@ -22,6 +23,9 @@ import picocli.CommandLine.Spec;
 @Command(name = "bench", mixinStandardHelpOptions = true,
         description = "Measures fluid-property calls per second: equation of state against tables.")
 final class BenchCommand implements Callable<Integer> {
+
+    /** Segment counts at which the tube-by-tube model is timed, to show how its time grows. */
+    private static final int[] SEGMENTS = {5, 10, 20};
 
     @Spec
     private CommandSpec spec;
@@ -43,6 +47,10 @@ final class BenchCommand implements Callable<Integer> {
     @Option(names = "--json", description = "print one JSON object")
     private boolean json;
 
+    @Option(names = "--coil-runs", paramLabel = "N", defaultValue = "11",
+            description = "ratings per median for the coil models (default ${DEFAULT-VALUE}; 0 skips them)")
+    private int coilRuns;
+
     @Override
     public Integer call() throws Exception {
         TableBenchmark.Settings settings;
@@ -51,7 +59,11 @@ final class BenchCommand implements Callable<Integer> {
         } catch (InputException e) {
             throw new InputException("--" + e.field(), e.msg(), e.args());
         }
+        if (coilRuns < 0 || coilRuns > 1000) {
+            throw new InputException("--coil-runs", org.finstack.core.Msg.OUT_OF_BOUNDS, (double) coilRuns, 0.0, 1000.0);
+        }
         TableBenchmark.Result r = TableBenchmark.run(settings);
+        CoilBenchmark.Result coils = coilRuns == 0 ? null : CoilBenchmark.run(coilRuns, SEGMENTS);
         PrintWriter out = spec.commandLine().getOut();
         if (json) {
             ObjectNode root = JsonNodeFactory.instance.objectNode();
@@ -65,6 +77,15 @@ final class BenchCommand implements Callable<Integer> {
             res.put("eosCalls", r.eosCalls());
             res.put("tableCalls", r.tableCalls());
             res.put("tableBuildSeconds", r.buildSeconds());
+            if (coils != null) {
+                res.put("zoneRatingMedian_ms", coils.zoneMedianMs());
+                res.put("tubeRatingMedian_ms", coils.tubeMedianMs());
+                ArrayNode seg = res.putArray("tubeRatingBySegments");
+                for (int i = 0; i < coils.segments().length; i++) {
+                    seg.addObject().put("segments", coils.segments()[i]).put("median_ms", coils.tubeMedianMsBySegments()[i]);
+                }
+                res.put("coilRuns", coils.runs());
+            }
             ArrayNode per = res.putArray("perFluid");
             for (TableBenchmark.FluidResult f : r.fluids()) {
                 ObjectNode o = per.addObject();
@@ -92,6 +113,17 @@ final class BenchCommand implements Callable<Integer> {
             }
             out.printf(Locale.ROOT, "  %-11s %9.3f %13.0f %13.0f %8.0fx%n", "all", r.buildSeconds(),
                     r.eosCallsPerSecond(), r.tableCallsPerSecond(), r.tableSpeedup());
+            if (coils != null) {
+                out.println();
+                out.println("Coil ratings, median of " + coils.runs() + " (4 rows x 24 tubes, 6 circuits, R-134a evaporator, "
+                        + "superheat solved):");
+                out.printf(Locale.ROOT, "  zone model                      %8.2f ms%n", coils.zoneMedianMs());
+                out.printf(Locale.ROOT, "  tube-by-tube, 10 segments/tube  %8.2f ms%n", coils.tubeMedianMs());
+                for (int i = 0; i < coils.segments().length; i++) {
+                    out.printf(Locale.ROOT, "  tube-by-tube, %2d segments/tube  %8.2f ms%n", coils.segments()[i],
+                            coils.tubeMedianMsBySegments()[i]);
+                }
+            }
         }
         return 0;
     }
