@@ -47,7 +47,7 @@ import org.finstack.fluid.TransportProperties;
  * +60 degC every 10 K and at compressed-liquid and superheated-vapour states (see
  * {@link #accuracy()}): viscosity and conductivity within 0.000001 % (relative 1e-8), surface
  * tension within 0.00000001 % (1e-10), for every blend and phase: both sides evaluate the same
- * published equations at the same densities (the goal of 5 % is met with room to spare). Against measurements: Geller et al. (2000) give an experimental uncertainty of at
+ * published equations at the same densities. Against measurements: Geller et al. (2000) give an experimental uncertainty of at
  * most 1.2 % for their viscosity data; the fits' deviation statistics were not available to this
  * implementation. The pseudo-pure treatment ignores the composition shift of the coexisting phases
  * inside the glide.
