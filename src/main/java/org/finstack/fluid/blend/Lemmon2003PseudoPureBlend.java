@@ -16,6 +16,7 @@ import org.finstack.fluid.HelmholtzFluid;
 import org.finstack.fluid.InputPair;
 import org.finstack.fluid.Phase;
 import org.finstack.fluid.SaturationState;
+import org.finstack.fluid.TransportProperties;
 import org.finstack.fluid.eos.Ancillary;
 import org.finstack.fluid.eos.HelmholtzEos;
 
@@ -111,6 +112,8 @@ public final class Lemmon2003PseudoPureBlend implements Fluid {
     /** Dew pressure at tMin: below it every state in range is vapour [Pa]. */
     private final double pMinDew;
     private final FluidInfo info;
+    /** Transport properties, built on first use (benign race: every build gives an equal object). */
+    private volatile TransportProperties transport;
 
     /**
      * @param info   the blend's constants; its composition must be given
@@ -542,6 +545,23 @@ public final class Lemmon2003PseudoPureBlend implements Fluid {
 
     private OutOfRangeException outOfRange(String property, double value, String range) {
         return new OutOfRangeException(Msg.FLUID_OUT_OF_RANGE, name, property, value, range);
+    }
+
+    /**
+     * @return viscosity, conductivity and surface tension from the blend correlations of Geller et
+     *         al. (2000, 2001) and Okada et al. (1999), evaluated at this equation's densities
+     *         ({@link org.finstack.fluid.transport.BlendTransport}); for the saturated liquid and
+     *         vapour take the bubble and dew points of {@link #saturationAtTemperature} or
+     *         {@link #saturationAtPressure}
+     */
+    @Override
+    public TransportProperties transport() {
+        TransportProperties t = transport;
+        if (t == null) {
+            t = org.finstack.fluid.transport.BlendTransport.forBlend(this);
+            transport = t;
+        }
+        return t;
     }
 
     @Override
