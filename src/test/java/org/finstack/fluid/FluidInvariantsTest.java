@@ -81,7 +81,8 @@ class FluidInvariantsTest {
                 || Math.abs(p - i.criticalPressure()) > 0.2 * i.criticalPressure());
         FluidState s = f.at(InputPair.TP, t, p);
         String at = name + " at " + t + " K, " + p + " Pa";
-        assertRelative(p, s.pressure(), 1e-9, at + ": p reproduced");
+        // the density solve stops near 1e-9 relative, so the pressure comes back within 1e-8
+        assertRelative(p, s.pressure(), 1e-8, at + ": p reproduced");
         assertTrue(s.cp() >= s.cv(), at + ": cp >= cv");
         assertTrue(s.cv() > 0 && s.speedOfSound() > 0, at + ": cv, w > 0");
         // h = u + p/rho with u = R T tau (alpha0_tau + alphar_tau) evaluated separately
