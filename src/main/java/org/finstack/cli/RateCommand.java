@@ -70,7 +70,10 @@ final class RateCommand implements Callable<Integer> {
         t.row("capacity", r.capacity(), Dimension.HEAT_FLOW);
         t.row("air in", r.airInletTemperature(), Dimension.TEMPERATURE);
         t.row("air out", r.airOutletTemperature(), Dimension.TEMPERATURE);
-        t.row("saturation", c.refrigerant().saturationTemperature(), Dimension.TEMPERATURE);
+        Rating.RefrigerantResult solved = r.refrigerant();
+        double saturation = solved == null ? c.refrigerant().saturationTemperature()
+                : r.duty() == org.finstack.coil.Duty.EVAPORATOR ? solved.outletDewTemperature() : solved.inletDewTemperature();
+        t.row(solved == null ? "saturation" : "saturation (dew point)", saturation, Dimension.TEMPERATURE);
         t.row("airflow", r.airVolumeFlow(), Dimension.VOLUME_FLOW);
         t.row("face velocity", r.faceVelocity(), Dimension.VELOCITY);
         t.row("air mass flow", r.airMassFlow(), Dimension.MASS_FLOW);
