@@ -20,7 +20,7 @@ import org.finstack.fluid.psychro.Psychrometrics;
  * sensible capacity is defined the same way. With the leaving humidity measured, the total.
  *
  * <p>Worked example: 1.5 m3/s of air at 30 °C, dry, 101 325 Pa, leaving at 40 °C: rho_in =
- * 1.164 38 kg/m3, m_da = 1.746 57 kg/s, Q = 17 570.6 W.
+ * 1.16443 kg/m3, m_da = 1.74665 kg/s, Q = 17571.3 W.
  */
 public final class MeasuredDuty {
 
