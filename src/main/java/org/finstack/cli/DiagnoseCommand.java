@@ -100,6 +100,20 @@ final class DiagnoseCommand implements Callable<Integer> {
         ObjectNode budget = u.putObject("airSideFoulingBudget_m2K_W");
         d.foulingBudget().entrySet().stream().sorted(Map.Entry.comparingByKey())
                 .forEach(e -> budget.put(e.getKey(), e.getValue()));
+        Measurements m = d.measurements();
+        ObjectNode measured = o.putObject("measured");
+        measured(measured, "airInletTemperature_C", m.airInletTemperature(), 273.15);
+        measured(measured, "airOutletTemperature_C", m.airOutletTemperature(), 273.15);
+        measured(measured, "airInletRelativeHumidity", m.airInletRelativeHumidity(), 0);
+        if (m.airOutletRelativeHumidity() != null) {
+            measured(measured, "airOutletRelativeHumidity", m.airOutletRelativeHumidity(), 0);
+        }
+        measured(measured, "volumeFlow_m3_s", m.volumeFlow(), 0);
+        measured(measured, "saturationTemperature_C", m.saturationTemperature(), 273.15);
+        measured(measured, m.outletConditionName() + "_K", m.outletCondition(), 0);
+        if (m.refrigerantMassFlow() != null) {
+            measured(measured, "massFlow_kg_s", m.refrigerantMassFlow(), 0);
+        }
         ArrayNode readings = o.putArray("readings");
         for (HealthyRanges.RangeCheck rc : d.ranges()) {
             readings.addObject().put("name", rc.name()).put("value", rc.value()).put("unit", rc.unit())
@@ -118,6 +132,12 @@ final class DiagnoseCommand implements Callable<Integer> {
         }
         methods.addObject().put("key", NormalCoverage.SOURCE.key()).put("reference", NormalCoverage.SOURCE.reference());
         return o;
+    }
+
+    /** A reading with its stated accuracy (limit ±a) and standard uncertainty; offset turns kelvin into Celsius. */
+    private static void measured(ObjectNode o, String key, Reading r, double offset) {
+        o.putObject(key).put("value", r.value() - offset).put("accuracy", r.accuracy())
+                .put("standardUncertainty", r.standardUncertainty());
     }
 
     private static void range(ObjectNode u, String key, Estimate e) {

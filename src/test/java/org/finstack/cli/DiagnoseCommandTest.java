@@ -55,6 +55,14 @@ class DiagnoseCommandTest {
         assertThat(res.get("airSideFouling_m2K_W").asDouble()).isPositive();
         assertThat(res.get("cleanUA_W_K").asDouble()).isGreaterThan(res.get("UA_W_K").asDouble());
         assertThat(res.get("readings").get(0).get("basis").asText()).isEqualTo("common practice");
+        // the example's stated limit 0.3 K on the entering air, standard uncertainty 0.3 / sqrt 3 (GUM 4.3.7)
+        JsonNode tIn = res.get("measured").get("airInletTemperature_C");
+        assertThat(tIn.get("value").asDouble()).isCloseTo(32.0, org.assertj.core.data.Offset.offset(1e-9));
+        assertThat(tIn.get("standardUncertainty").asDouble()).isCloseTo(0.3 / Math.sqrt(3),
+                org.assertj.core.data.Offset.offset(1e-12));
+        // 10 % of 2600 m3/h as the airflow's limit
+        assertThat(res.get("measured").get("volumeFlow_m3_s").get("accuracy").asDouble())
+                .isCloseTo(260 / 3600.0, org.assertj.core.data.Offset.offset(1e-12));
         assertThat(res.get("payback").get("summary").asText()).startsWith("Cleaning this condenser");
         assertThat(res.get("payback").get("paybackYears").asDouble()).isPositive();
     }
