@@ -1,0 +1,340 @@
+package org.finstack.study.diagnosis;
+
+import java.util.EnumMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Optional;
+import org.apache.commons.math3.analysis.solvers.BrentSolver;
+import org.apache.commons.math3.exception.TooManyEvaluationsException;
+import org.finstack.airside.AirSideCorrelation;
+import org.finstack.airside.AirSideCorrelations;
+import org.finstack.coil.CoilCase;
+import org.finstack.coil.CoilModels;
+import org.finstack.coil.Duty;
+import org.finstack.coil.FoulingResistances;
+import org.finstack.coil.Rating;
+import org.finstack.core.ConvergenceException;
+import org.finstack.core.InputException;
+import org.finstack.core.Msg;
+import org.finstack.core.Warnings;
+import org.finstack.study.cost.CarnotCop;
+import org.finstack.study.cost.CleaningCase;
+import org.finstack.study.cost.CleaningPayback;
+import org.finstack.study.cost.FouledCoil;
+import org.finstack.study.cost.SaturationShift;
+import org.finstack.study.cost.Tariff;
+import org.finstack.study.diagnosis.Measurements.Input;
+import org.finstack.study.uncertainty.NormalCoverage;
+
+/**
+ * A coil's present state inferred from field readings.
+ *
+ * <p><b>Method.</b> The measured duty Q_m comes from the airflow and the air's enthalpy change
+ * ({@link MeasuredDuty}). The rating model is run at the measured conditions (entering air,
+ * airflow, saturation temperature, superheat or subcooling held) and an added air-side fouling
+ * resistance R_f ({@link FoulingResistances#airSide()}, per unit air-side area) is solved by
+ * Brent's method on [0, 0.1] m2 K/W so that the model's capacity on the same basis equals Q_m.
+ * The present UA is the model's UA at R_f; the clean coil is the same case with R_f = 0.
+ * A coil that delivers at least the clean model's duty is reported clean (R_f = 0, a warning
+ * says by how much it exceeds it).
+ *
+ * <p><b>Fouling level</b> (resistance-based): the inferred air-side fouling resistance of the
+ * whole coil, R_f / (eta_o A_o) [K/W], as a fraction of the clean coil's total resistance
+ * 1 / UA_clean: level = R_f UA_clean / (eta_o A_o). 0 is clean; 1 means the dirt holds back as
+ * much heat as the whole clean coil did (UA halved).
+ *
+ * <p><b>Uncertainty: linear propagation</b> (JCGM 100:2008, the GUM, eq. 10, inputs
+ * uncorrelated). Sensitivities by one-sided finite differences of the model: the implicit
+ * derivative dR_f/dx = (dQ_m/dx - dQ_model/dx) / (dQ_model/dR_f), then every output through
+ * its own dependence on x and R_f. Inputs: each reading with its stated accuracy (standard
+ * uncertainty a / sqrt 3, {@link Reading}), and the air-side correlation's j, whose factor s has
+ * the standard deviation of its published scatter ({@link NormalCoverage}). A coil whose true j
+ * is s times the correlation's has its air film 1/(s h_o) in place of 1/h_o: the same total
+ * resistance is split differently, R_f,true = R_f + (1 - 1/s)/h_o, so the j scatter moves the
+ * fouling, the clean UA and capacity and the loss, not the present UA or capacity (the fins'
+ * efficiency change with h_o is neglected). Ranges are value ∓ 1.2816 u (10th to 90th
+ * percentile of a normal distribution), held at zero for R_f and the level.
+ *
+ * <p><b>Payback</b> (when cleaning data are given): the UA lost, f = 1 - UA/UA_clean, on the clean
+ * coil's mean temperature difference dT = Q_s,clean / UA_clean shifts the saturation temperature by
+ * dT f / (1 - f) ({@link SaturationShift}); the compressor power clean and dirty follows from a
+ * Carnot-based COP ({@link CleaningPayback}). A condenser's refrigerating duty is its heat
+ * rejection times COP / (1 + COP) at the clean COP.
+ *
+ * @param measurements  the readings
+ * @param basis         whether sensible or total heat was matched
+ * @param measuredDuty  Q_m with its uncertainty [W]
+ * @param airSideFouling R_f [m2 K/W]
+ * @param ua            present UA [W/K]
+ * @param cleanUa       clean coil's UA at the same conditions [W/K]
+ * @param foulingLevel  resistance-based fouling level [-]
+ * @param capacityNow   the model's total capacity at R_f [W]
+ * @param capacityClean the clean coil's total capacity at the same conditions [W]
+ * @param capacityLossFraction 1 - capacityNow / capacityClean [-]
+ * @param foulingBudget each input's contribution to u(R_f) [m2 K/W], by its key
+ * @param now           the rating at R_f
+ * @param clean         the clean rating
+ * @param ranges        each reading against a healthy coil's range (common practice)
+ * @param warnings      what a service engineer should look at
+ * @param payback       the cleaning payback, if cleaning data were given
+ */
+public record Diagnosis(Measurements measurements, MeasuredDuty.Basis basis, Estimate measuredDuty,
+        Estimate airSideFouling, Estimate ua, Estimate cleanUa, Estimate foulingLevel, Estimate capacityNow,
+        Estimate capacityClean, Estimate capacityLossFraction, Map<String, Double> foulingBudget, Rating now,
+        Rating clean, List<HealthyRanges.RangeCheck> ranges, List<String> warnings,
+        Optional<CleaningPayback> payback) {
+
+    /** Largest air-side fouling resistance searched [m2 K/W] (the bound FoulingResistances accepts). */
+    public static final double MAX_FOULING = 0.1;
+
+    /** Relative tolerance of the matched duty. */
+    static final double DUTY_TOLERANCE = 1e-4;
+
+    private static final int MAX_EVALUATIONS = 60;
+
+    /** Copies the collections. */
+    public Diagnosis {
+        foulingBudget = Map.copyOf(foulingBudget);
+        ranges = List.copyOf(ranges);
+        warnings = List.copyOf(warnings);
+    }
+
+    /**
+     * Diagnoses a coil.
+     *
+     * @param template     the coil, refrigerant and fouling parts (its air-side fouling must be zero:
+     *                     it is what is inferred)
+     * @param measurements the readings
+     * @param cleaning     payback inputs, or {@code null}
+     * @return the diagnosis
+     */
+    public static Diagnosis of(CoilCase template, Measurements measurements, CleaningInputs cleaning) {
+        if (template.fouling().airSide() != 0) {
+            throw new InputException("fouling.airSide", Msg.IMPOSSIBLE,
+                    "is what diagnose infers from the readings; leave it out of a measurement file");
+        }
+        return new Solver(template, measurements).run(cleaning);
+    }
+
+    /** The outputs whose uncertainty is propagated. */
+    private record Outputs(double fouling, double ua, double cleanUa, double level, double now, double clean) {
+
+        double loss() {
+            return 1 - now / clean;
+        }
+
+        double[] all() {
+            return new double[] {fouling, ua, cleanUa, level, now, clean, loss()};
+        }
+    }
+
+    private static final class Solver {
+        private final CoilCase template;
+        private final Measurements m;
+        private final MeasuredDuty.Basis basis;
+        private final Warnings warnings = new Warnings();
+
+        Solver(CoilCase template, Measurements m) {
+            this.template = template;
+            this.m = m;
+            this.basis = MeasuredDuty.basis(m);
+        }
+
+        private Rating rate(Measurements readings, double fouling) {
+            CoilCase c = readings.applyTo(template);
+            FoulingResistances f = c.fouling();
+            return CoilModels.rate(c.withFouling(new FoulingResistances(fouling, f.inside(), f.contact())));
+        }
+
+        /** R_f for a measured duty, given the clean rating at the same readings. */
+        private double solveFouling(Measurements readings, double duty, Rating cleanRating) {
+            double q0 = basis.of(cleanRating);
+            if (duty >= q0) {
+                return 0;
+            }
+            double lo = 0;
+            double hi = Math.min(MAX_FOULING, 2e-4);
+            double fHi = basis.of(rate(readings, hi)) - duty;
+            while (fHi > 0) {
+                if (hi >= MAX_FOULING) {
+                    throw new InputException("measured.airOutletTemperature", Msg.IMPOSSIBLE, String.format(Locale.ROOT,
+                            "the measured duty %.0f W is below what this coil delivers even with %s m2 K/W of air-side "
+                                    + "fouling (%.0f W); check the airflow and the temperature readings",
+                            duty, MAX_FOULING, fHi + duty));
+                }
+                lo = hi;
+                hi = Math.min(MAX_FOULING, hi * 4);
+                fHi = basis.of(rate(readings, hi)) - duty;
+            }
+            BrentSolver brent = new BrentSolver(1e-12, 1e-9);
+            double a = lo;
+            double b = hi;
+            try {
+                return brent.solve(MAX_EVALUATIONS, r -> (basis.of(rate(readings, r)) - duty) / duty, a, b);
+            } catch (TooManyEvaluationsException e) {
+                throw new ConvergenceException("air-side fouling resistance", MAX_EVALUATIONS, b - a);
+            }
+        }
+
+        Diagnosis run(CleaningInputs cleaning) {
+            double qm = MeasuredDuty.of(m, basis);
+            Rating clean = rate(m, 0);
+            double r = solveFouling(m, qm, clean);
+            Rating now = r == 0 ? clean : rate(m, r);
+            if (r == 0) {
+                double above = qm / basis.of(clean) - 1;
+                warnings.add(String.format(Locale.ROOT, "the measured %s duty is %.1f %% above what the clean coil's "
+                        + "model gives: no fouling can be inferred (the air-side correlation's scatter, or the readings)",
+                        basis.id(), 100 * above));
+            }
+            double h = now.airCoefficient();
+            // one extra rating at each end for dQ/dR_f: at R_f and at zero
+            double dR = 0.05 / h;
+            Rating nowPlus = rate(m, r + dR);
+            double dqdR = (basis.of(nowPlus) - basis.of(now)) / dR;
+            double dTotaldR = (nowPlus.capacity() - now.capacity()) / dR;
+            double dUadR = (nowPlus.ua() - now.ua()) / dR;
+            Rating cleanPlus = r == 0 ? nowPlus : rate(m, dR);
+            double dCleandR = (cleanPlus.capacity() - clean.capacity()) / dR;
+            double perR = now.resistances().airFouling() > 0 ? now.resistances().airFouling() / r
+                    : nowPlus.resistances().airFouling() / (r + dR);
+            Outputs base = new Outputs(r, now.ua(), clean.ua(), r * perR * clean.ua(), now.capacity(), clean.capacity());
+            double[] y0 = base.all();
+            double[] u2 = new double[y0.length];
+            double uDuty2 = 0;
+            Map<String, Double> budget = new LinkedHashMap<>();
+            Map<Input, Double> steps = new EnumMap<>(Input.class);
+            steps.put(Input.AIR_INLET_TEMPERATURE, 0.2);
+            steps.put(Input.AIR_OUTLET_TEMPERATURE, 0.2);
+            steps.put(Input.AIR_INLET_HUMIDITY, 0.05);
+            steps.put(Input.AIR_OUTLET_HUMIDITY, 0.05);
+            steps.put(Input.VOLUME_FLOW, 0.05 * m.volumeFlow().value());
+            steps.put(Input.SATURATION_TEMPERATURE, 0.2);
+            steps.put(Input.OUTLET_CONDITION, 0.2);
+            for (Map.Entry<Input, Double> e : steps.entrySet()) {
+                Input in = e.getKey();
+                Reading reading = m.get(in);
+                if (reading == null || reading.accuracy() == 0) {
+                    continue;
+                }
+                double step = direction(in, reading.value()) * e.getValue();
+                Measurements moved = m.with(in, reading.value() + step);
+                double qmMoved = MeasuredDuty.of(moved, basis);
+                Outputs y;
+                if (in == Input.AIR_OUTLET_TEMPERATURE || in == Input.AIR_OUTLET_HUMIDITY) {
+                    double dRf = (qmMoved - qm) / dqdR;
+                    double rf = r + dRf;
+                    y = new Outputs(rf, now.ua() + dUadR * dRf, clean.ua(), rf * perR * clean.ua(),
+                            now.capacity() + dTotaldR * dRf, clean.capacity());
+                } else {
+                    Rating n = rate(moved, r);
+                    Rating c = rate(moved, 0);
+                    double dRf = (qmMoved - qm - (basis.of(n) - basis.of(now))) / dqdR;
+                    double rf = r + dRf;
+                    y = new Outputs(rf, n.ua() + dUadR * dRf, c.ua(), rf * perR * c.ua(), n.capacity() + dTotaldR * dRf,
+                            c.capacity());
+                }
+                double u = reading.standardUncertainty();
+                double[] yi = y.all();
+                for (int k = 0; k < yi.length; k++) {
+                    double c = (yi[k] - y0[k]) / step * u;
+                    u2[k] += c * c;
+                }
+                double cDuty = (qmMoved - qm) / step * u;
+                uDuty2 += cDuty * cDuty;
+                budget.put(in == Input.OUTLET_CONDITION ? m.outletConditionName() : in.key(),
+                        Math.abs((yi[0] - y0[0]) / step * u));
+            }
+            // the air-side correlation's j scatter: s = 1 + sigma_j
+            AirSideCorrelation corr = AirSideCorrelations.standard("coil.finType", template.coil().finType());
+            double sigmaJ = NormalCoverage.sigma(corr.scatterJ(), corr.scatterBand());
+            double s = 1 + sigmaJ;
+            double shift = (1 - 1 / s) / h;
+            double filmClean = clean.resistances().airFilm() + clean.resistances().fin();
+            double cleanUaJ = 1 / (1 / clean.ua() + filmClean * (1 / s - 1));
+            double cleanCapJ = clean.capacity() + dCleandR * (1 / s - 1) / h;
+            Outputs yj = new Outputs(r + shift, now.ua(), cleanUaJ, (r + shift) * perR * cleanUaJ, now.capacity(),
+                    cleanCapJ);
+            double[] yjs = yj.all();
+            for (int k = 0; k < yjs.length; k++) {
+                double c = yjs[k] - y0[k];
+                u2[k] += c * c;
+            }
+            budget.put("airSideCorrelation.j", Math.abs(shift));
+            Estimate fouling = Estimate.of(r, Math.sqrt(u2[0]), true);
+            Estimate level = Estimate.of(y0[3], Math.sqrt(u2[3]), true);
+            checkMassFlow(now);
+            List<HealthyRanges.RangeCheck> ranges = HealthyRanges.check(m, now.geometry().faceArea());
+            for (HealthyRanges.RangeCheck rc : ranges) {
+                if (!rc.typical()) {
+                    warnings.add(String.format(Locale.ROOT, "%s %.2f %s is %s for a healthy %s (%s: %s to %s %s)",
+                            rc.name(), rc.value(), rc.unit(), rc.status(), m.duty().id(), HealthyRanges.BASIS,
+                            trim(rc.low()), trim(rc.high()), rc.unit()));
+                }
+            }
+            now.warnings().forEach(warnings::add);
+            Optional<CleaningPayback> payback = cleaning == null ? Optional.empty()
+                    : Optional.of(payback(cleaning, now, clean));
+            return new Diagnosis(m, basis, Estimate.of(qm, Math.sqrt(uDuty2), true), fouling,
+                    Estimate.of(y0[1], Math.sqrt(u2[1]), true), Estimate.of(y0[2], Math.sqrt(u2[2]), true), level,
+                    Estimate.of(y0[4], Math.sqrt(u2[4]), true), Estimate.of(y0[5], Math.sqrt(u2[5]), true),
+                    Estimate.of(y0[6], Math.sqrt(u2[6]), false), budget, now, clean, ranges, warnings.list(), payback);
+        }
+
+        /** Steps go inwards where a reading sits at a bound (humidity 1, superheat 0). */
+        private double direction(Input in, double value) {
+            return switch (in) {
+                case AIR_INLET_HUMIDITY, AIR_OUTLET_HUMIDITY -> value > 0.5 ? -1 : 1;
+                case AIR_INLET_TEMPERATURE -> m.duty() == Duty.EVAPORATOR ? 1 : -1;
+                case AIR_OUTLET_TEMPERATURE ->
+                        m.duty() == Duty.CONDENSER || m.airInletTemperature().value() - value > 1 ? 1 : -1;
+                default -> 1;
+            };
+        }
+
+        private void checkMassFlow(Rating now) {
+            Reading mf = m.refrigerantMassFlow();
+            if (mf == null || now.refrigerant() == null) {
+                return;
+            }
+            double model = now.refrigerant().massFlow();
+            double diff = mf.value() / model - 1;
+            if (Math.abs(diff) > 0.1) {
+                warnings.add(String.format(Locale.ROOT, "the measured refrigerant mass flow %.4f kg/s differs by %+.0f %% "
+                        + "from the %.4f kg/s the diagnosed coil passes at these readings: check the flow meter, the "
+                        + "superheat or subcooling reading, and the air-side readings", mf.value(), 100 * diff, model));
+            }
+        }
+
+        private CleaningPayback payback(CleaningInputs ci, Rating now, Rating clean) {
+            double f = Math.max(0, 1 - now.ua() / clean.ua());
+            double dT = clean.moisture().sensibleCapacity() / clean.ua();
+            double shift = f == 0 ? 0 : SaturationShift.fromCapacityLoss(f, dT);
+            double sat = m.saturationTemperature().value();
+            boolean evaporator = m.duty() == Duty.EVAPORATOR;
+            double tEvap = evaporator ? sat + shift : ci.otherSaturationTemperature();
+            double tCond = evaporator ? ci.otherSaturationTemperature() : sat - shift;
+            String other = evaporator ? "cleaning.condensingTemperature" : "cleaning.evaporatingTemperature";
+            if (!(tCond > tEvap)) {
+                throw new InputException(other, Msg.IMPOSSIBLE, String.format(Locale.ROOT,
+                        "the condensing temperature (%.1f C) must lie above the evaporating temperature (%.1f C)",
+                        tCond - 273.15, tEvap - 273.15));
+            }
+            double duty = now.capacity();
+            if (!evaporator) {
+                double cop = CarnotCop.cop(tEvap, tCond, ci.secondLawEfficiency(), Warnings.discard());
+                duty = duty * cop / (1 + cop);
+            }
+            CleaningCase cc = new CleaningCase(evaporator ? FouledCoil.EVAPORATOR : FouledCoil.CONDENSER, duty, tEvap,
+                    tCond, shift, ci.secondLawEfficiency(), ci.runHours() * CleaningCase.SECONDS_PER_HOUR,
+                    new Tariff(ci.pricePerKwh(), ci.currency()), ci.cost());
+            return CleaningPayback.of(cc, warnings);
+        }
+
+        private static String trim(double v) {
+            return org.finstack.core.Numbers.brief(v);
+        }
+    }
+}
