@@ -11,7 +11,8 @@ import picocli.CommandLine.Command;
  */
 @Command(name = "finstack", mixinStandardHelpOptions = true, versionProvider = Main.Version.class,
         description = "Rates and compares plate-fin-and-tube refrigeration coils.",
-        subcommands = {RateCommand.class, AirCommand.class, FluidCommand.class, BenchCommand.class})
+        subcommands = {RateCommand.class, AirCommand.class, FluidCommand.class, BenchCommand.class,
+                FoulingCommand.class, FrostCommand.class})
 public final class Main implements Runnable {
 
     /** Exit status for bad input. */
