@@ -56,7 +56,7 @@ public final class CaseFiles {
             .enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS);
 
     private static final Set<String> TOP = Set.of("version", "name", "description", "coil", "air",
-            "refrigerant", "fouling");
+            "refrigerant", "fouling", "fan");
     private static final Set<String> COIL = Set.of("tubeOuterDiameter", "tubeWall", "tubeMaterial", "arrangement",
             "transversePitch", "rowPitch", "rows", "tubesPerRow", "finnedLength", "finType", "finPitch",
             "finThickness", "finMaterial", "circuits", "coating", "coatingThickness", "circuiting", "waveHeight", "waveLength",
