@@ -31,7 +31,7 @@ public final class SegmentExchange {
     private static final double CP_DRY = 1006;
     private static final double CP_VAPOUR = 1860; // ASHRAE Handbook - Fundamentals 2017 Ch. 1 (moist-air enthalpy)
 
-    private static final int MAX_ITERATIONS = 60;
+    private static final int MAX_ITERATIONS = 200;
     private static final double TOLERANCE_K = 1e-6;
 
     private SegmentExchange() {
@@ -133,7 +133,8 @@ public final class SegmentExchange {
             if (i >= MAX_ITERATIONS) {
                 throw new ConvergenceException("wet-surface temperature", i, Math.abs(tEff - tS));
             }
-            tS = tEff;
+            // plain substitution first; damped once it has had a few steps (it can oscillate on thin, wet coils)
+            tS = i < 6 ? tEff : 0.5 * (tS + tEff);
         }
     }
 
