@@ -9,6 +9,9 @@ import org.finstack.coil.CoilCase;
 import org.finstack.coil.CoilModels;
 import org.finstack.coil.Rating;
 import org.finstack.core.Citation;
+import org.finstack.core.InputException;
+import org.finstack.study.uncertainty.UncertaintyBand;
+import org.finstack.units.Quantities;
 import org.finstack.geometry.DerivedGeometry;
 import org.finstack.io.CaseFiles;
 import org.finstack.io.RatingJson;
@@ -41,23 +44,63 @@ final class RateCommand implements Callable<Integer> {
     @Option(names = "--tubes", description = "add the per-tube table (tube-by-tube model)")
     private boolean tubes;
 
+    @Option(names = "--uncertainty", paramLabel = "SAMPLES", defaultValue = "0",
+            description = "add a capacity band (10th to 90th percentile) from this many Monte Carlo samples over the "
+                    + "air-side correlation's published scatter (0: off)")
+    private int samples;
+
+    @Option(names = "--seed", paramLabel = "SEED", defaultValue = "1", description = "random seed of the band")
+    private long seed;
+
     @Override
     public Integer call() throws Exception {
         UnitSystem system = Output.system(units);
         CoilCase c = CaseFiles.read(caseFile);
         Rating r = CoilModels.rate(c);
+        UncertaintyBand band = samples == 0 ? null : bandOf(c);
         PrintWriter out = spec.commandLine().getOut();
         if (json) {
             ObjectNode root = Output.envelope("rate", caseFile);
             root.set("results", RatingJson.results(r, tubes));
+            if (band != null) {
+                ObjectNode u = ((ObjectNode) root.get("results")).putObject("uncertainty");
+                u.put("capacityP10_W", band.capacityP10());
+                u.put("capacityP50_W", band.capacityP50());
+                u.put("capacityP90_W", band.capacityP90());
+                u.put("airPressureDropP10_Pa", band.pressureDropP10());
+                u.put("airPressureDropP90_Pa", band.pressureDropP90());
+                u.put("samples", band.samples());
+                u.put("failedSamples", band.failedSamples());
+                u.put("seed", band.seed());
+                u.put("method", BAND_METHOD);
+            }
             com.fasterxml.jackson.databind.node.ArrayNode cautions = root.putArray("cautions");
             org.finstack.study.Cautions.forFluid(org.finstack.fluid.Fluids.byName(c.refrigerant().fluid()))
                     .forEach(cautions::add);
             out.println(Output.pretty(root));
         } else {
             table(out, c, r, system);
+            if (band != null) {
+                out.println();
+                out.println("Capacity band, 10th to 90th percentile (" + BAND_METHOD + "):");
+                out.println("  " + Quantities.format(band.capacityP10(), Dimension.HEAT_FLOW, system) + " to "
+                        + Quantities.format(band.capacityP90(), Dimension.HEAT_FLOW, system) + "; air pressure drop "
+                        + Quantities.format(band.pressureDropP10(), Dimension.PRESSURE_DIFFERENCE, system) + " to "
+                        + Quantities.format(band.pressureDropP90(), Dimension.PRESSURE_DIFFERENCE, system));
+            }
         }
         return 0;
+    }
+
+    private static final String BAND_METHOD = "Monte Carlo over the air-side correlation's published scatter, "
+            + "seeded, reproducible";
+
+    private UncertaintyBand bandOf(CoilCase c) {
+        try {
+            return UncertaintyBand.of(c, samples, seed);
+        } catch (InputException e) {
+            throw e.field().equals("samples") ? new InputException("--uncertainty", e.msg(), e.args()) : e;
+        }
     }
 
     private static void table(PrintWriter out, CoilCase c, Rating r, UnitSystem u) {
