@@ -149,7 +149,7 @@ public record Summary(String title, String question, String recommendation, List
                         + Format.q(p.conditions().fouling().airSide(), Dimension.FOULING_RESISTANCE, u) : "") + ".");
         if (c.withFan()) {
             out.add("Airflow on the fan: where the project's fan curve meets each coil's air pressure drop; ducting, "
-                    + "filters and grilles are not counted.");
+                    + "filters and grilles are not counted. The chart shows capacity and air pressure drop there.");
         }
         out.add("Design pressure: saturation pressure at " + Format.q(c.basis().designTemperature(),
                 Dimension.TEMPERATURE, u) + " (" + c.basis().description() + ") less ambient; tubes rated by the "

@@ -157,11 +157,11 @@ public final class Explanation {
                 }
                 out.add(s + ".");
                 if (o.chargeKg().isPresent() && e.chargeKg().isPresent() && e.chargeKg().getAsDouble() > 0) {
-                    out.add("It holds " + moreOrLess(o.chargeKg().getAsDouble() / e.chargeKg().getAsDouble() - 1)
+                    out.add(o.name() + " holds " + moreOrLess(o.chargeKg().getAsDouble() / e.chargeKg().getAsDouble() - 1)
                             + " refrigerant and weighs " + moreOrLess(o.rating().geometry().metalMass()
                                     / e.rating().geometry().metalMass() - 1) + " in metal.");
                 } else {
-                    out.add("It weighs " + moreOrLess(o.rating().geometry().metalMass()
+                    out.add(o.name() + " weighs " + moreOrLess(o.rating().geometry().metalMass()
                             / e.rating().geometry().metalMass() - 1) + " in metal than the existing coil.");
                 }
             }
