@@ -1,0 +1,64 @@
+package org.finstack.cli;
+
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.concurrent.Callable;
+import org.finstack.core.InputException;
+import org.finstack.core.Msg;
+import org.finstack.report.HtmlReport;
+import org.finstack.report.PdfReport;
+import org.finstack.report.Summary;
+import org.finstack.study.compare.Comparison;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/** {@code finstack report PROJECT.json --out report.pdf [--html report.html]}: the one-page summary. */
+@Command(name = "report", mixinStandardHelpOptions = true,
+        description = "Writes the one-page summary of a project's comparison as PDF and/or HTML.")
+final class ReportCommand implements Callable<Integer> {
+
+    @Spec
+    private CommandSpec spec;
+
+    @Parameters(index = "0", paramLabel = "PROJECT", description = "project file (*.finstack.json)")
+    private Path projectFile;
+
+    @Option(names = "--out", paramLabel = "PDF", description = "PDF file to write")
+    private Path pdf;
+
+    @Option(names = "--html", paramLabel = "HTML", description = "HTML file to write")
+    private Path html;
+
+    @Option(names = "--units", paramLabel = "SYSTEM", defaultValue = "si",
+            description = "units of the summary: si or us (default: ${DEFAULT-VALUE})")
+    private String units;
+
+    @Option(names = "--design-temperature", paramLabel = "TEMP",
+            description = "highest expected saturation temperature for the design-pressure margin, e.g. \"60 C\"")
+    private String designTemperature;
+
+    @Override
+    public Integer call() {
+        if (pdf == null && html == null) {
+            throw new InputException("--out", Msg.EITHER_REQUIRED, "--out FILE.pdf", "--html FILE.html");
+        }
+        var system = Output.system(units);
+        CompareCommand.Loaded l = CompareCommand.load(projectFile);
+        Comparison c = Comparison.of(l.project(), CompareCommand.basis(l.project(), designTemperature))
+                .withUnreadable(l.unreadable());
+        Summary s = Summary.of(c, system);
+        PrintWriter out = spec.commandLine().getOut();
+        if (pdf != null) {
+            PdfReport.write(s, pdf);
+            out.println("wrote " + pdf);
+        }
+        if (html != null) {
+            HtmlReport.write(s, html);
+            out.println("wrote " + html);
+        }
+        return 0;
+    }
+}

@@ -1,0 +1,154 @@
+package org.finstack.study.compare;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import org.finstack.coil.CoilCase;
+import org.finstack.coil.CoilModels;
+import org.finstack.coil.Rating;
+import org.finstack.coil.RefrigerantSide;
+import org.finstack.io.ProjectFiles;
+import org.finstack.study.Option;
+import org.finstack.study.Overrides;
+import org.finstack.study.Project;
+import org.finstack.study.fan.FanCurve;
+import org.finstack.study.pressure.DesignPressureCheck;
+import org.finstack.study.pressure.TubePressureRating;
+import org.finstack.testing.Reference;
+import org.junit.jupiter.api.Test;
+
+/**
+ * The comparison agrees with single ratings of the same coils (CoilModels.rate on each option's
+ * case, the independent reference), finds the fan's operating point, and keeps comparing when
+ * one option cannot be rated.
+ */
+class ComparisonTest {
+
+    static final Path FULL = Path.of("examples/projects/otterby-condenser-options-full.finstack.json");
+    static final Path DEMO = Path.of("examples/projects/otterby-condenser-options.finstack.json");
+
+    @Test
+    void agreesWithSingleRatingsOfTheSameCoils() {
+        for (Path file : List.of(DEMO, FULL)) {
+            Project p = ProjectFiles.read(file);
+            Comparison c = Comparison.of(p);
+            assertThat(c.options()).hasSize(p.allOptions().size());
+            double existing = CoilModels.rate(p.caseOf(0)).capacity();
+            for (OptionResult o : c.options()) {
+                Rating alone = CoilModels.rate(p.caseOf(o.index()));
+                String ctx = file + " " + o.name();
+                Reference.assertRelative(alone.capacity(), o.rating().capacity(), 1e-12, ctx);
+                Reference.assertRelative(alone.airPressureDrop(), o.rating().airPressureDrop(), 1e-12, ctx);
+                Reference.assertRelative(alone.capacity() / existing, o.capacityRatio().getAsDouble(), 1e-12, ctx);
+                Reference.assertRelative(alone.geometry().metalMass(), o.rating().geometry().metalMass(), 1e-12, ctx);
+                if (alone.refrigerant() != null) {
+                    Reference.assertRelative(alone.refrigerant().charge(), o.chargeKg().getAsDouble(), 1e-12, ctx);
+                    Reference.assertRelative(alone.refrigerant().pressureDrop(),
+                            o.refrigerantPressureDrop().getAsDouble(), 1e-12, ctx);
+                } else {
+                    assertThat(o.chargeKg()).as(ctx).isEmpty();
+                    assertThat(o.charge().notes()).as(ctx).anyMatch(n -> n.contains("not computed"));
+                }
+            }
+        }
+    }
+
+    @Test
+    void fanAirflowIsWhereTheFanCurveMeetsTheCoilsPressureDrop() {
+        Project p = ProjectFiles.read(FULL);
+        FanCurve fan = FanMatch.curve(p.constraints().fanCurve());
+        for (OptionResult o : Comparison.of(p).options()) {
+            assertThat(o.fan().found()).as(o.name() + ": " + o.fan().error()).isTrue();
+            Rating there = CoilModels.rate(FanMatch.atAirflow(p.caseOf(o.index()), o.fan().airflow()));
+            // Independent check: the coil rated alone at the found airflow needs what the fan gives there.
+            Reference.assertRelative(fan.pressure(o.fan().airflow()), there.airPressureDrop(), 2e-3, o.name());
+            Reference.assertRelative(there.capacity(), o.fan().capacity(), 1e-3, o.name());
+            assertThat(o.fan().ratings()).isLessThanOrEqualTo(FanMatch.MAX_RATINGS);
+        }
+    }
+
+    @Test
+    void moreRowsMeanLessAirOnTheSameFan() {
+        Comparison c = Comparison.of(ProjectFiles.read(FULL));
+        OptionResult three = c.options().get(0);
+        OptionResult five = c.options().get(3);
+        assertThat(five.coil().rows()).isGreaterThan(three.coil().rows());
+        assertThat(five.fan().airflow()).isLessThan(three.fan().airflow());
+        assertThat(five.rating().airPressureDrop()).isGreaterThan(three.rating().airPressureDrop());
+    }
+
+    @Test
+    void aDamagedOptionReportsItsErrorAndTheRestCompare() {
+        Project p = ProjectFiles.read(FULL);
+        RefrigerantSide r = p.conditions().refrigerant();
+        // R-744 at 45 C is above its critical temperature (31 C): the zone model refuses the case.
+        RefrigerantSide co2 = new RefrigerantSide("R744", r.duty(), r.saturationTemperature(), r.convention(), 0,
+                r.liquidTemperature(), r.inletTemperature(), r.target(), r.model(), r.segments());
+        List<Option> options = new ArrayList<>(p.options());
+        options.add(1, new Option("Damaged: R-744 above critical", p.options().get(0).coil(),
+                new Overrides(null, co2, null)));
+        Project damaged = new Project(p.version(), p.name(), p.conditions(), p.existing(), options, p.constraints(),
+                p.notes());
+        Comparison c = Comparison.of(damaged);
+        assertThat(c.options()).hasSize(5);
+        OptionResult bad = c.options().get(2);
+        assertThat(bad.rated()).isFalse();
+        assertThat(bad.error()).contains("saturationTemperature");
+        assertThat(c.options()).filteredOn(OptionResult::rated).hasSize(4);
+        assertThat(c.recommended()).isPresent();
+        assertThat(c.recommended().get().name()).isNotEqualTo(bad.name());
+    }
+
+    @Test
+    void pressureMarginFollowsTheStudyPressurePackage() {
+        Project p = ProjectFiles.read(FULL);
+        Comparison c = Comparison.of(p);
+        // Default basis: EN 378-2 air-cooled high side, ambient up to 32 C -> 55 C (from memory; see DesignTemperatureLevel).
+        Reference.assertRelative(328.15, c.basis().designTemperature(), 1e-12, "design temperature");
+        for (OptionResult o : c.options()) {
+            var g = o.coil();
+            double allowable = TubePressureRating.allowablePressure(g.tubeMaterial().id(), g.tubeOuterDiameter(),
+                    g.tubeWall(), 328.15).allowableGauge();
+            double expected = DesignPressureCheck.margin(allowable, o.pressure().saturationPressure()).margin();
+            Reference.assertRelative(expected, o.pressureMargin().getAsDouble(), 1e-12, o.name());
+            // R-134a saturation pressure at 55 C is about 1.49 MPa (from memory: ASHRAE Handbook-Fundamentals tables).
+            Reference.assertRelative(1.49e6, o.pressure().saturationPressure(), 0.02, o.name());
+        }
+    }
+
+    @Test
+    void limitsBrokenAreNamedAndKeepAnOptionFromTheRecommendation() {
+        Comparison c = Comparison.of(ProjectFiles.read(FULL));
+        OptionResult tooDeep = c.options().get(3);
+        assertThat(tooDeep.constraintIssues()).singleElement().asString().contains("Depth");
+        assertThat(c.recommended()).isPresent();
+        assertThat(c.recommended().get().index()).isNotEqualTo(3);
+    }
+
+    @Test
+    void flammableRefrigerantChargeIsScreenedAgainstTheRoomWhenGiven() {
+        Project p = ProjectFiles.read(Path.of("examples/projects/marrowfield-propane-cooler.finstack.json"));
+        DesignBasis basis = DesignBasis.defaultFor(p.conditions()).withRoom(new Room(50, 20, 1.8, false));
+        Comparison c = Comparison.of(p, basis);
+        for (OptionResult o : c.options()) {
+            assertThat(o.charge().screening()).as(o.name()).isNotNull();
+            // EN 378-1 m1 for R-290 = 4 m3 x 0.038 kg/m3 = 0.152 kg (ChargeScreening's worked example);
+            // these coils hold less, so they pass.
+            assertThat(o.charge().screening().within()).isTrue();
+        }
+        Comparison noRoom = Comparison.of(p);
+        assertThat(noRoom.options().get(0).charge().notes()).anyMatch(n -> n.contains("m1 = 0.152 kg"));
+    }
+
+    @Test
+    void caseOfEachOptionIsTheOneRated() {
+        Project p = ProjectFiles.read(DEMO);
+        Comparison c = Comparison.of(p);
+        for (OptionResult o : c.options()) {
+            CoilCase expected = p.caseOf(o.index());
+            assertThat(o.ratedCase()).isEqualTo(expected);
+        }
+    }
+}
