@@ -52,7 +52,10 @@ final class TubeCoilModelMarch {
     /** Glide below which a fluid is treated as pure (one saturation temperature at a pressure) [K]. */
     private static final double PURE_GLIDE_K = 1e-6;
 
-    /** Most re-evaluations of a two-phase segment's film coefficient with its own heat flux, and their tolerance. */
+    /**
+     * Most re-evaluations of a two-phase segment's film coefficient with its own heat flux and
+     * mid-segment quality, and the relative change of the coefficient that ends them.
+     */
     private static final int FLUX_ITERATIONS = 6;
     private static final double FLUX_TOLERANCE = 1e-4;
 
@@ -309,12 +312,12 @@ final class TubeCoilModelMarch {
         return flow.override() <= 0 && p.region == Region.TWO_PHASE;
     }
 
-    private double insideCoefficient(Point p, double g, double q, Warnings w) {
+    private double insideCoefficient(Point p, double quality, double g, double q, Warnings w) {
         if (flow.override() > 0) {
             return flow.override();
         }
         if (p.region == Region.TWO_PHASE) {
-            TubeFlow f = new TubeFlow(flow.diameter(), g, clamp(p.quality), Math.max(q, 100));
+            TubeFlow f = new TubeFlow(flow.diameter(), g, clamp(quality), Math.max(q, 100));
             return evaporator ? Dryout.apply(BOILING, p.sat.props(), f, w)
                     : CONDENSING.heatTransferCoefficient(p.sat.props(), f, CONDENSING_WALL_DT, w);
         }
@@ -399,18 +402,19 @@ final class TubeCoilModelMarch {
         for (int part = 0; part < MAX_PARTS && remaining > 1e-12; part++) {
             double cap = capacity(cur, massFlow);
             double share = remaining;
-            double q = startFlux;
-            double hi = insideCoefficient(cur, massFlux, q, w);
+            double hi = insideCoefficient(cur, cur.quality(), massFlux, startFlux, w);
             SegmentExchange.Result x = SegmentExchange.exchange(surface, fraction * share, airIn, airMassFlow * share,
                     cur.temperature(), cap, hi, w);
             for (int i = 0; i < FLUX_ITERATIONS && fluxDependent(cur); i++) {
-                // the boiling or condensing coefficient depends on the heat flux it helps to set
-                double next = Math.abs(x.heat()) / (insideArea * share);
-                if (Math.abs(next - q) <= FLUX_TOLERANCE * Math.max(next, 100)) {
+                // the boiling or condensing coefficient depends on the heat flux it helps to set, and
+                // is taken at the quality halfway through the segment (within the dome)
+                double q = Math.abs(x.heat()) / (insideArea * share);
+                double xMid = Math.min(1, Math.max(0, cur.quality() + 0.5 * x.heat() / (massFlow * s.latentHeat())));
+                double next = insideCoefficient(cur, xMid, massFlux, q, w);
+                if (Math.abs(next - hi) <= FLUX_TOLERANCE * hi) {
                     break;
                 }
-                q = next;
-                hi = insideCoefficient(cur, massFlux, q, w);
+                hi = next;
                 x = SegmentExchange.exchange(surface, fraction * share, airIn, airMassFlow * share, cur.temperature(),
                         cap, hi, w);
             }
