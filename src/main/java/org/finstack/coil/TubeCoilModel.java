@@ -47,24 +47,36 @@ import org.finstack.fluid.psychro.Psychrometrics;
  * Where a segment would carry the refrigerant across a phase boundary (the dew or the bubble
  * point) it is split at the point where it arrives there (a bounded Brent solve for the share of
  * the segment) and the rest is rated in the new phase with the same entering air; the parts'
- * leaving air is mixed.
+ * leaving air is mixed. A two-phase film coefficient (flow boiling with the dryout treatment, or
+ * condensation) is taken at the segment's mid quality and its own heat flux, found by a short
+ * bounded iteration that starts from the same flux for every segment (so that a segment's result
+ * depends only on what enters it).
  *
  * <p><b>Iteration.</b> One pass marches every circuit once with the air states of the previous
- * pass (Gauss-Seidel: a segment's leaving air is used at once by the row behind it). The passes
- * repeat until the leaving air of every segment changes by less than {@value #AIR_TOLERANCE_K}
- * K, each circuit's inlet pressure has settled, and, with more than one circuit, all circuits
- * see the same pressure drop: each pass the circuits' share of the total flow is scaled by
- * (mean dp / circuit dp)^(1/2) and normalised (the flow split of circuits joined at common
- * headers). Evaporator circuits end at the common outlet header at the reference pressure (their
- * inlet pressure is the reference pressure plus their own drop); condenser circuits start from
- * the common inlet header at the reference pressure. At most {@value #MAX_PASSES} passes;
- * otherwise {@link ConvergenceException} with the last residual.
+ * pass (Gauss-Seidel: a segment's leaving air is used at once by the row behind it). The circuits
+ * start with the same flow per tube; each pass their shares of the total flow are scaled by
+ * (mean dp / circuit dp)^(1/2) and normalised, until all see the same pressure drop within
+ * 0.2 % (circuits joined at common headers). Evaporator circuits end at the common outlet header
+ * at the reference pressure, so each one's inlet pressure is the reference pressure plus its own
+ * drop (updated as the mean of the last two estimates: the drop falls as the inlet pressure
+ * rises, and the plain update swings); condenser circuits start from the common inlet header at
+ * the reference pressure. The passes end when the circuits' drops have settled (1 Pa or 1e-4 of
+ * the drop), every circuit's outlet enthalpy has settled ({@value #OUTLET_TOLERANCE} J/kg), the
+ * air-side and refrigerant-side duties agree within {@value #BALANCE_TOLERANCE}, and no
+ * segment's leaving-air enthalpy moves by more than cp x {@value #AIR_TOLERANCE_K} K; at most
+ * {@value #MAX_PASSES} passes, otherwise {@link ConvergenceException} with the last residual
+ * (the largest of these changes over its tolerance).
  *
  * <p><b>Targets</b> as the zone model: a mass flow is rated as it is; a superheat or subcooling
- * is that of the circuits' outlets mixed by enthalpy at the header pressure, met by a bounded
- * Brent solve on the total mass flow; a required capacity is met by a Brent solve on the
- * saturation temperature with the outlet condition held. Air properties are taken at the mean
- * of entering and leaving air temperature, iterated around the whole solve.
+ * is that of the circuits' outlets mixed by enthalpy at the header pressure, met by a bracketed
+ * root search on the total mass flow (Illinois regula falsi, to {@value #ENTHALPY_ACCURACY} J/kg
+ * of outlet enthalpy); while the search is far from the root the passes run with looser
+ * tolerances, and the flow returned is always rated with the tolerances above. A required
+ * capacity is met by the same search on the saturation temperature, walking from the given
+ * saturation temperature in {@value #CAPACITY_STEP_K} K steps to the nearest sign change (at very
+ * low pressure the pressure drop makes the capacity fall again), with the outlet condition held.
+ * Air properties are taken at the mean of entering and leaving air temperature, iterated around
+ * the whole solve.
  *
  * <p><b>Saturation properties</b> are not recomputed per segment and pass: each rating keeps a
  * cache of the fluid's saturation states on a fine pressure grid (relative step
@@ -105,11 +117,18 @@ public final class TubeCoilModel {
     private static final int MAX_EVALUATIONS = 200;
 
     /** Mixed-outlet enthalpy miss small enough for the outlet condition [J/kg] (about 0.005 K of vapour). */
-    private static final double ENTHALPY_ACCURACY = 5;
+    static final double ENTHALPY_ACCURACY = 5;
 
     /** Outlet miss [J/kg] per unit of looseness, and the largest looseness, of the flows tried while solving. */
     private static final double LOOSE_MISS = 100;
     private static final double MAX_LOOSENESS = 20;
+
+    /** Field of the refusal of a flow that loses most of the pressure; inside a solve, a flow far too large. */
+    private static final String TOO_MUCH_FLOW = "refrigerant.massFlow";
+    private static final double TOO_MUCH_FLOW_MISS = 1e5;
+
+    /** Step of the saturation-temperature search for a required capacity [K]. */
+    static final double CAPACITY_STEP_K = 3;
     private static final int MAX_AIR_MEAN_LOOPS = 6;
     private static final double AIR_MEAN_TOLERANCE_K = 0.1;
     private static final double SPLIT_TOLERANCE = 0.002;
@@ -153,23 +172,8 @@ public final class TubeCoilModel {
      * @return the root
      */
     static double solve(DoubleUnaryOperator f, double lo, double hi, String what, double relTol) {
-        return solve(f, lo, hi, what, relTol, 1e-14);
-    }
-
-    /**
-     * Bounded Brent solve that also stops where |f| is below an accuracy.
-     *
-     * @param f             function with a sign change on [lo, hi]
-     * @param lo            lower end
-     * @param hi            upper end
-     * @param what          quantity, for the exception
-     * @param relTol        relative tolerance on the root
-     * @param valueAccuracy |f| small enough to stop at
-     * @return the root
-     */
-    static double solve(DoubleUnaryOperator f, double lo, double hi, String what, double relTol, double valueAccuracy) {
         try {
-            return new BrentSolver(relTol, relTol * Math.max(1e-12, Math.abs(hi)), valueAccuracy).solve(MAX_EVALUATIONS,
+            return new BrentSolver(relTol, relTol * Math.max(1e-12, Math.abs(hi)), 1e-14).solve(MAX_EVALUATIONS,
                     f::applyAsDouble, lo, hi);
         } catch (TooManyEvaluationsException e) {
             throw new ConvergenceException(what, MAX_EVALUATIONS, hi - lo);
@@ -258,8 +262,9 @@ public final class TubeCoilModel {
          * flow returned.
          */
         private double looseness = 1;
-        /** Mass flow of the last outlet-condition solve, the next one's start [kg/s]. */
+        /** Mass flow of the last outlet-condition solve, the next one's start, and the estimate it went with [kg/s]. */
         private double lastMassFlow;
+        private double lastEstimate;
 
         TubeCoilRun(CoilSetup s) {
             this.s = s;
@@ -361,15 +366,27 @@ public final class TubeCoilModel {
             double[] closest = {Double.POSITIVE_INFINITY};
             DoubleUnaryOperator miss = m -> {
                 looseness = Math.max(1, Math.min(MAX_LOOSENESS, closest[0] / LOOSE_MISS));
-                Outcome o = rated.computeIfAbsent(m, this::evaluate);
-                looseness = 1;
+                Outcome o;
+                try {
+                    o = rated.computeIfAbsent(m, this::evaluate);
+                } catch (InputException e) {
+                    if (!e.field().equals(TOO_MUCH_FLOW)) {
+                        throw e;
+                    }
+                    return -TOO_MUCH_FLOW_MISS; // far too much flow: the outlet is far short of the target
+                } finally {
+                    looseness = 1;
+                }
                 double target = outletTargetEnthalpy(o.outletPressure, kelvin);
                 double f = evaporator ? o.outletEnthalpy - target : target - o.outletEnthalpy;
                 closest[0] = Math.min(closest[0], Math.abs(f));
                 return f;
             };
-            double guess = lastMassFlow > 0 ? lastMassFlow : Math.max(1e-6, estimatedMassFlow());
-            double step = lastMassFlow > 0 ? 1.005 : 1.3;
+            double estimate = Math.max(1e-6, estimatedMassFlow());
+            boolean warm = lastMassFlow > 0 && Math.abs(estimate / lastEstimate - 1) < 0.02;
+            double guess = lastMassFlow > 0 ? lastMassFlow * estimate / lastEstimate : estimate;
+            double step = warm ? 1.005 : 1.3;
+            lastEstimate = estimate;
             double a = guess;
             double fa = miss.applyAsDouble(a);
             if (Math.abs(fa) <= ENTHALPY_ACCURACY) {
@@ -431,22 +448,45 @@ public final class TubeCoilModel {
         private Outcome forCapacity(RefrigerantSide.Target.Capacity q) {
             double tAir = air.inlet().dryBulb();
             double tc = s.fluid().info().criticalTemperature();
-            double lo = evaporator ? Math.max(tAir - 60, s.fluid().info().minTemperature() + 1) : tAir + 0.5;
-            double hi = evaporator ? tAir - 0.5 : Math.min(tAir + 60, tc - 2);
+            // the held superheat (subcooling) needs the saturation that far below (above) the air, and some more
+            double near = evaporator ? tAir - q.outletK() - 2 : tAir + q.outletK() + 2;
+            double far = evaporator ? Math.max(tAir - 60, s.fluid().info().minTemperature() + 1) : Math.min(tAir + 60, tc - 2);
+            if (evaporator ? near <= far : near >= far) {
+                throw new InputException("refrigerant.requiredCapacity", Msg.IMPOSSIBLE,
+                        "the held outlet condition leaves no saturation temperature to search");
+            }
             DoubleUnaryOperator miss = t -> {
                 reference = CoilSetup.referencePressure(s.fluid(), withSaturation(t));
                 return Math.abs(atOutletCondition(q.outletK()).duty) - q.watts();
             };
-            double fLo = miss.applyAsDouble(lo);
-            double fHi = miss.applyAsDouble(hi);
-            if (fLo * fHi > 0) {
-                throw new InputException("refrigerant.requiredCapacity", Msg.IMPOSSIBLE, String.format(Locale.ROOT,
-                        "%.0f W is outside what this coil delivers between saturation temperatures %.1f C and %.1f C "
-                                + "(%.0f W to %.0f W)", q.watts(), lo - 273.15, hi - 273.15, fLo + q.watts(),
-                        fHi + q.watts()));
+            // walk from the given saturation temperature (the starting guess) in steps of 3 K: the
+            // capacity grows with the temperature difference until the pressure drop at low pressure
+            // takes over, so the nearest sign change is searched, not the ends of a wide range
+            double a = Math.max(Math.min(c.refrigerant().saturationTemperature(), Math.max(near, far)), Math.min(near, far));
+            double fa = miss.applyAsDouble(a);
+            double away = evaporator ? -1 : 1;
+            double direction = fa < 0 ? away : -away;
+            double b = a;
+            double fb = fa;
+            for (int k = 0; fa * fb > 0; k++) {
+                double next = b + direction * CAPACITY_STEP_K;
+                double limit = direction == away ? far : near;
+                if (k > 40 || (next - limit) * direction > 0 && Math.abs(b - limit) < 1e-9) {
+                    throw new InputException("refrigerant.requiredCapacity", Msg.IMPOSSIBLE, String.format(Locale.ROOT,
+                            "%.0f W is outside what this coil delivers at saturation temperatures between %.1f C and "
+                                    + "%.1f C (%.0f W at %.1f C)", q.watts(), Math.min(near, far) - 273.15,
+                            Math.max(near, far) - 273.15, fb + q.watts(), b - 273.15));
+                }
+                if ((next - limit) * direction > 0) {
+                    next = limit;
+                }
+                a = b;
+                fa = fb;
+                b = next;
+                fb = miss.applyAsDouble(b);
             }
-            double t = solve(miss, lo, hi, "saturation temperature for the required capacity", 1e-7,
-                    1e-4 * q.watts());
+            double t = illinois(miss, a, fa, b, fb, 1e-9, 1e-4 * q.watts(),
+                    "saturation temperature for the required capacity");
             reference = CoilSetup.referencePressure(s.fluid(), withSaturation(t));
             return atOutletCondition(q.outletK());
         }
@@ -614,7 +654,7 @@ public final class TubeCoilModel {
                         p -= r.pressureDrop();
                         h = r.enthalpyOut();
                         if (p <= 0.2 * reference) {
-                            throw new InputException("refrigerant.massFlow", Msg.IMPOSSIBLE, String.format(Locale.ROOT,
+                            throw new InputException(TOO_MUCH_FLOW, Msg.IMPOSSIBLE, String.format(Locale.ROOT,
                                     "%.4g kg/s through %d circuits loses more than 80 %% of the refrigerant pressure",
                                     massFlow, n));
                         }

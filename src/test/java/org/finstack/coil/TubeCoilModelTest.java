@@ -166,6 +166,19 @@ class TubeCoilModelTest {
     }
 
     @Test
+    void requiredCapacityIsMetBySolvingTheSaturationTemperature() {
+        // the target the user set, with the superheat held
+        Rating r = new TubeCoilModel().rate(evaporatorCase(coil(3, 4, 2, 1.2), "R134a", new Target.Capacity(1500, 5), 4,
+                0.6));
+        assertRelative(1500, r.capacity(), 1e-3, "required capacity");
+        assertThat(r.refrigerant().outletSuperheat()).isCloseTo(5.0, org.assertj.core.data.Offset.offset(0.1));
+        // less than the 0 C rating delivers, so the coil runs warmer than 0 C (monotone trend)
+        assertThat(evaporator.capacity()).isGreaterThan(1500);
+        double dew = r.refrigerant().outletTemperature() - r.refrigerant().outletSuperheat();
+        assertThat(dew).isGreaterThan(C + 0);
+    }
+
+    @Test
     void condenserSubcoolingIsMet() {
         RefrigerantSide r = new RefrigerantSide("R134a", Duty.CONDENSER, C + 45, SaturationConvention.DEW, 0, 0, C + 70,
                 new Target.Subcooling(3), Model.TUBES, 4);
