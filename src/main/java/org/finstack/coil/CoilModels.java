@@ -16,8 +16,7 @@ public final class CoilModels {
         return switch (c.refrigerant().model()) {
             case ISOTHERMAL -> new IsothermalCoilModel().rate(c);
             case ZONES -> new ZoneCoilModel().rate(c);
-            case TUBES -> throw new org.finstack.core.InputException("refrigerant.model",
-                    org.finstack.core.Msg.IMPOSSIBLE, "the tube-by-tube model is not in this build");
+            case TUBES -> new TubeCoilModel().rate(c);
         };
     }
 }
