@@ -1,0 +1,90 @@
+package org.finstack.study.search;
+
+import java.util.List;
+import org.finstack.core.Check;
+import org.finstack.material.Material;
+import org.finstack.material.Materials;
+import org.finstack.study.Progress;
+import org.finstack.study.Project;
+
+/**
+ * Measures how many candidates a search rates per second: whole searches (generation, rating on
+ * the worker pool, ranking and the Pareto front) of a space of some thousands of candidates,
+ * after one untimed warm-up search, repeated until a minimum time has passed. A measurement,
+ * not a test.
+ */
+public final class SearchBenchmark {
+
+    private SearchBenchmark() {
+    }
+
+    /**
+     * The figures of one measurement.
+     *
+     * @param candidatesPerSearch combinations each search enumerated
+     * @param ratedPerSearch      candidates each search rated
+     * @param searches            timed searches
+     * @param seconds             their total wall-clock time [s]
+     * @param threads             worker threads
+     * @param model               rating model used
+     */
+    public record Result(int candidatesPerSearch, int ratedPerSearch, int searches, double seconds, int threads,
+            String model) {
+
+        /** @return combinations enumerated per second of wall-clock time [1/s] */
+        public double candidatesPerSecond() {
+            return candidatesPerSearch * (double) searches / seconds;
+        }
+    }
+
+    /**
+     * A space of some thousands of candidates for a project: its default space
+     * ({@link SearchSpace#forProject}) with the tube materials copper, aluminium 3003 and
+     * copper-nickel 90/10, and 1, 2, 4 and 8 circuits (the project's own circuit count dropped).
+     *
+     * @param project the project
+     * @return the space
+     */
+    public static SearchSpace benchSpace(Project project) {
+        Materials lib = Materials.library();
+        SearchSpace base = SearchSpace.forProject(project);
+        List<Material> tubes = List.of(lib.tube("bench", "copper"), lib.tube("bench", "aluminium-3003"),
+                lib.tube("bench", "cupronickel-90-10"));
+        return base.withMaterials(tubes, base.finMaterials()).withCircuits(List.of(1, 2, 4, 8));
+    }
+
+    /**
+     * Measures the benchmark space of a project ({@link #benchSpace}).
+     *
+     * @param project    the project (its refrigerant side names the model: isothermal or zones)
+     * @param threads    worker threads, at least 1
+     * @param minSeconds least time to measure [s]
+     * @return the measurement
+     */
+    public static Result candidatesPerSecond(Project project, int threads, double minSeconds) {
+        return candidatesPerSecond(project, benchSpace(project), threads, minSeconds);
+    }
+
+    /**
+     * Measures a space.
+     *
+     * @param project    the project
+     * @param space      the candidates
+     * @param threads    worker threads, at least 1
+     * @param minSeconds least time to measure [s], at most 600
+     * @return the measurement
+     */
+    public static Result candidatesPerSecond(Project project, SearchSpace space, int threads, double minSeconds) {
+        Check.within("minSeconds", minSeconds, 0, 600);
+        SearchResult warm = CandidateSearch.run(project, space, threads, Progress.NONE);
+        int searches = 0;
+        long start = System.nanoTime();
+        double seconds;
+        do {
+            CandidateSearch.run(project, space, threads, Progress.NONE);
+            searches++;
+            seconds = (System.nanoTime() - start) / 1e9;
+        } while (seconds < minSeconds);
+        return new Result(warm.generated(), warm.rated(), searches, seconds, threads, warm.model());
+    }
+}
