@@ -243,7 +243,8 @@ public final class CandidateSearch {
     private static List<SearchResult.FailureGroup> group(List<CandidateGenerator.Failure> failures) {
         Map<String, List<CandidateGenerator.Failure>> by = new LinkedHashMap<>();
         for (CandidateGenerator.Failure f : failures) {
-            String kind = f.field() + "|" + (f.field().isEmpty() ? f.reason() : "");
+            // kind: the field named, or without one the reason with its numbers blanked
+            String kind = f.field() + "|" + (f.field().isEmpty() ? f.reason().replaceAll("[-+0-9.eE]+", "#") : "");
             by.computeIfAbsent(kind, k -> new ArrayList<>()).add(f);
         }
         return by.values().stream()

@@ -1,5 +1,6 @@
 package org.finstack.study.search;
 
+import java.lang.management.ManagementFactory;
 import java.util.List;
 import org.finstack.core.Check;
 import org.finstack.material.Material;
@@ -27,13 +28,23 @@ public final class SearchBenchmark {
      * @param seconds             their total wall-clock time [s]
      * @param threads             worker threads
      * @param model               rating model used
+     * @param cpuSeconds          processor time the whole process spent meanwhile [s], or 0 where the
+     *                            virtual machine does not report it
      */
     public record Result(int candidatesPerSearch, int ratedPerSearch, int searches, double seconds, int threads,
-            String model) {
+            String model, double cpuSeconds) {
 
         /** @return combinations enumerated per second of wall-clock time [1/s] */
         public double candidatesPerSecond() {
             return candidatesPerSearch * (double) searches / seconds;
+        }
+
+        /**
+         * @return combinations enumerated per second of processor time [1/s], or 0 when not
+         *         reported: the figure that holds on a machine shared with other work
+         */
+        public double candidatesPerCpuSecond() {
+            return cpuSeconds > 0 ? candidatesPerSearch * (double) searches / cpuSeconds : 0;
         }
     }
 
@@ -78,6 +89,7 @@ public final class SearchBenchmark {
         Check.within("minSeconds", minSeconds, 0, 600);
         SearchResult warm = CandidateSearch.run(project, space, threads, Progress.NONE);
         int searches = 0;
+        long cpuStart = processCpuNanos();
         long start = System.nanoTime();
         double seconds;
         do {
@@ -85,6 +97,16 @@ public final class SearchBenchmark {
             searches++;
             seconds = (System.nanoTime() - start) / 1e9;
         } while (seconds < minSeconds);
-        return new Result(warm.generated(), warm.rated(), searches, seconds, threads, warm.model());
+        long cpu = processCpuNanos();
+        double cpuSeconds = cpu > 0 && cpuStart > 0 ? (cpu - cpuStart) / 1e9 : 0;
+        return new Result(warm.generated(), warm.rated(), searches, seconds, threads, warm.model(), cpuSeconds);
+    }
+
+    /** @return the process's processor time [ns], or 0 where the virtual machine does not report it */
+    private static long processCpuNanos() {
+        if (ManagementFactory.getOperatingSystemMXBean() instanceof com.sun.management.OperatingSystemMXBean os) {
+            return Math.max(0, os.getProcessCpuTime());
+        }
+        return 0;
     }
 }
