@@ -15,7 +15,7 @@ import picocli.CommandLine.Command;
  */
 @Command(name = "finstack", mixinStandardHelpOptions = true, versionProvider = Main.Version.class,
         description = "Rates and compares plate-fin-and-tube refrigeration coils.",
-        subcommands = {RateCommand.class, AirCommand.class, FluidCommand.class, BenchCommand.class,
+        subcommands = {RateCommand.class, SearchCommand.class, AirCommand.class, FluidCommand.class, BenchCommand.class,
             Main.WorkbenchCommand.class})
 public final class Main implements Callable<Integer> {
 
