@@ -16,8 +16,9 @@ import picocli.CommandLine.Command;
 @Command(name = "finstack", mixinStandardHelpOptions = true, versionProvider = Main.Version.class,
         description = "Rates and compares plate-fin-and-tube refrigeration coils.",
         subcommands = {RateCommand.class, AirCommand.class, FluidCommand.class, BenchCommand.class,
-            CompareCommand.class, SensitivityCommand.class, SweepCommand.class, ReportCommand.class,
-            DiagnoseCommand.class, FoulingCommand.class, FrostCommand.class, Main.WorkbenchCommand.class})
+            CompareCommand.class, SearchCommand.class, SensitivityCommand.class, SweepCommand.class,
+            ReportCommand.class, DiagnoseCommand.class, FoulingCommand.class, FrostCommand.class,
+            Main.WorkbenchCommand.class})
 public final class Main implements Callable<Integer> {
 
     /** Exit status for bad input. */
