@@ -50,9 +50,9 @@ final class ResultsPanel extends JPanel {
     private final JTextArea warnings = new JTextArea(4, 40);
     private final JTextArea cautions = new JTextArea(3, 40);
     private final JPanel cautionBox = new JPanel(new BorderLayout());
-    private final JLabel frost = new JLabel(" ");
-    private final JLabel zones = new JLabel(" ");
-    private final JLabel tdBasis = new JLabel(" ");
+    private final JTextArea frost = note();
+    private final JTextArea zones = note();
+    private final JTextArea tdBasis = note();
     private List<String> cautionLines = List.of();
     private final BarsComponent bars = new BarsComponent();
     private Rating rating;
@@ -81,7 +81,7 @@ final class ResultsPanel extends JPanel {
         zones.setName("results.zones");
         tdBasis.setName("results.tdBasis");
         tdBasis.setText(Messages.format("results.tdBasis", org.finstack.io.RatingJson.TD_BASIS));
-        tdBasis.putClientProperty(FlatClientProperties.STYLE_CLASS, "small");
+        frost.setFont(frost.getFont().deriveFont(java.awt.Font.BOLD));
         values.get("td").setToolTipText(org.finstack.io.RatingJson.TD_BASIS);
         JPanel notes = new JPanel();
         notes.setLayout(new BoxLayout(notes, BoxLayout.Y_AXIS));
@@ -184,7 +184,8 @@ final class ResultsPanel extends JPanel {
         set("sensible", Quantities.format(m.sensibleCapacity(), Dimension.HEAT_FLOW, u));
         set("latent", Quantities.format(m.latentCapacity(), Dimension.HEAT_FLOW, u));
         set("shr", String.format(Locale.ROOT, "%.2f", m.sensibleHeatRatio()));
-        set("condensate", Quantities.format(m.condensate(), Dimension.MASS_FLOW, u));
+        set("condensate", Quantities.format(m.condensate(), Dimension.MASS_FLOW, u,
+                u == UnitSystem.US ? "lb/h" : "kg/h"));
         set("airOutRh", String.format(Locale.ROOT, "%.0f %%", 100 * m.airOutletRelativeHumidity()));
         set("airIn", Quantities.format(r.airInletTemperature(), Dimension.TEMPERATURE, u));
         set("airOut", Quantities.format(r.airOutletTemperature(), Dimension.TEMPERATURE, u));
@@ -216,6 +217,7 @@ final class ResultsPanel extends JPanel {
         }
         tdBasis.setVisible(ref != null);
         frost.setText(m.frost() ? "\u2744 " + Messages.get("results.frostWarning") : " ");
+        frost.setVisible(m.frost());
         List<String> z = new ArrayList<>();
         for (Rating.ZoneResult zr : r.zones()) {
             z.add(Messages.format("results.zone", zr.name(), String.format(Locale.ROOT, "%.0f", 100 * zr.areaFraction()),
@@ -224,6 +226,7 @@ final class ResultsPanel extends JPanel {
                     zr.wet() ? Messages.get("results.zoneWet") : Messages.get("results.zoneDry")));
         }
         zones.setText(z.isEmpty() ? " " : Messages.get("results.zonesTitle") + "  " + String.join("   \u00b7   ", z));
+        zones.setVisible(!z.isEmpty());
         List<ResistanceBars.Bar> list = new ArrayList<>();
         r.resistances().shares().forEach((k, v) -> list.add(new ResistanceBars.Bar(
                 Messages.get("results.resistance." + k), v)));
@@ -248,6 +251,18 @@ final class ResultsPanel extends JPanel {
         return Messages.format(evaporator ? "results.outletSuperheat" : "results.outletSubcooling",
                 Quantities.format(evaporator ? ref.outletSuperheat() : ref.outletSubcooling(),
                         Dimension.TEMPERATURE_DIFFERENCE, u), t);
+    }
+
+    /** @return a read-only text that wraps to the panel's width instead of widening it */
+    private static JTextArea note() {
+        JTextArea t = new JTextArea(" ", 1, 40);
+        t.setEditable(false);
+        t.setLineWrap(true);
+        t.setWrapStyleWord(true);
+        t.setOpaque(false);
+        t.setFocusable(false);
+        t.setBorder(BorderFactory.createEmptyBorder(1, 0, 1, 0));
+        return t;
     }
 
     private void set(String key, String text) {
