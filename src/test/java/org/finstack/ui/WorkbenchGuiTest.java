@@ -294,7 +294,7 @@ class WorkbenchGuiTest {
         window.label("results.refrigerantOutlet").requireText(java.util.regex.Pattern.compile("superheat .*"));
         window.label("results.td").requireText(Quantities.format(org.finstack.io.RatingJson.temperatureDifference(
                 expected), Dimension.TEMPERATURE_DIFFERENCE, UnitSystem.SI));
-        assertThat(window.label("results.tdBasis").text()).contains(org.finstack.io.RatingJson.TD_BASIS);
+        assertThat(window.textBox("results.tdBasis").text()).contains(org.finstack.io.RatingJson.TD_BASIS);
         shot("10-zone-model-wet-evaporator");
         // the tube-by-tube model: rated when it is in the build, else refused with the reason at the chooser
         window.tabbedPane("tabs").selectTab(1);
