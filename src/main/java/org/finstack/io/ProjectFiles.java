@@ -33,7 +33,8 @@ import org.finstack.units.Quantities;
 import org.finstack.units.UnitSystem;
 
 /**
- * Reads and writes project files (format version 1):
+ * Reads and writes project files (format version 1; the refrigerant object carries the case
+ * file's version-2 keys when the conditions use them):
  * <pre>
  * { "version": 1, "name": ..., "conditions": { "air": {...}, "refrigerant": {...}, "fouling": {...} },
  *   "existing": OPTION, "options": [ OPTION, ... ],
@@ -306,9 +307,44 @@ public final class ProjectFiles {
         n.put("fluid", r.fluid());
         n.put("duty", r.duty().id());
         n.put("saturationTemperature", quantity(r.saturationTemperature(), Dimension.TEMPERATURE));
-        n.put("insideCoefficient", quantity(r.insideCoefficient(), Dimension.HEAT_TRANSFER_COEFFICIENT));
+        if (r.convention() != RefrigerantSide.SaturationConvention.DEW) {
+            n.put("saturationConvention", r.convention().name().toLowerCase(java.util.Locale.ROOT));
+        }
+        if (r.insideCoefficient() > 0 || r.model() == RefrigerantSide.Model.ISOTHERMAL) {
+            n.put("insideCoefficient", quantity(r.insideCoefficient(), Dimension.HEAT_TRANSFER_COEFFICIENT));
+        }
+        if (r.liquidTemperature() > 0) {
+            n.put("liquidTemperature", quantity(r.liquidTemperature(), Dimension.TEMPERATURE));
+        }
+        if (r.inletTemperature() > 0) {
+            n.put("inletTemperature", quantity(r.inletTemperature(), Dimension.TEMPERATURE));
+        }
+        String held = r.duty() == org.finstack.coil.Duty.EVAPORATOR ? "superheat" : "subcooling";
+        RefrigerantSide.Target t = r.target();
+        if (t instanceof RefrigerantSide.Target.Superheat s) {
+            n.put("superheat", quantity(s.kelvin(), Dimension.TEMPERATURE_DIFFERENCE));
+        } else if (t instanceof RefrigerantSide.Target.Subcooling s) {
+            n.put("subcooling", quantity(s.kelvin(), Dimension.TEMPERATURE_DIFFERENCE));
+        } else if (t instanceof RefrigerantSide.Target.MassFlow m) {
+            n.put("massFlow", quantity(m.kgPerSecond(), Dimension.MASS_FLOW));
+        } else if (t instanceof RefrigerantSide.Target.Capacity c) {
+            n.put(held, quantity(c.outletK(), Dimension.TEMPERATURE_DIFFERENCE));
+            n.put("requiredCapacity", quantity(c.watts(), Dimension.HEAT_FLOW));
+        }
+        // the reader infers the isothermal model without a target and the zone model with one
+        RefrigerantSide.Model inferred = t instanceof RefrigerantSide.Target.None ? RefrigerantSide.Model.ISOTHERMAL
+                : RefrigerantSide.Model.ZONES;
+        if (r.model() != inferred) {
+            n.put("model", r.model().id());
+        }
+        if (r.segments() != DEFAULT_SEGMENTS) {
+            n.put("segments", r.segments());
+        }
         return n;
     }
+
+    /** Segments per tube the case-file reader assumes when none are given ({@link CaseFiles}). */
+    private static final int DEFAULT_SEGMENTS = 10;
 
     /**
      * @param f added resistances

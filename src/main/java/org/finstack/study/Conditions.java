@@ -55,6 +55,20 @@ public record Conditions(AirInlet air, RefrigerantSide refrigerant, FoulingResis
         return new Conditions(air, r, fouling);
     }
 
+    /** @return the rating model the refrigerant side names */
+    public CoilModel model() {
+        return new CoilModel(refrigerant.model());
+    }
+
+    /**
+     * @param m a rating model
+     * @return these conditions rated by that model (the refrigerant side otherwise unchanged)
+     * @throws org.finstack.core.InputException when the refrigerant side lacks what the model needs
+     */
+    public Conditions withModel(CoilModel m) {
+        return new Conditions(air, m.applyTo(refrigerant), fouling);
+    }
+
     /**
      * @param f other added resistances
      * @return these conditions with other added resistances

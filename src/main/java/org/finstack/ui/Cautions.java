@@ -1,62 +1,49 @@
 package org.finstack.ui;
 
-import java.util.ArrayList;
 import java.util.List;
-import java.util.Set;
-import org.finstack.coil.CoilCase;
-import org.finstack.coil.Duty;
+import org.finstack.core.FinstackException;
+import org.finstack.fluid.Fluid;
+import org.finstack.fluid.Fluids;
 
-/** The cautions text: for one rated case, and in full for the menu's cautions panel. */
+/**
+ * The cautions panel of the Help menu: for every refrigerant the fluid layer knows, its safety
+ * class (from its data file) and the cautions {@link org.finstack.study.Cautions} gives for it,
+ * the blends Finstack refuses with the reason, then the statement that local codes govern. One
+ * source of truth: the same cautions the command line and each rating show.
+ */
 final class Cautions {
 
     private Cautions() {
     }
 
     /**
-     * @param c a rated case
-     * @return the cautions its refrigerant calls for, or empty text when none
+     * Builds the text; it loads every fluid's data, so call it off the event thread.
+     *
+     * @return every refrigerant's cautions
      */
-    static String forCase(CoilCase c) {
-        if (c == null) {
-            return "";
-        }
-        String fluid = c.refrigerant().fluid();
-        Set<RefrigerantSafety.Hazard> hazards = RefrigerantSafety.hazards(fluid);
-        if (hazards.isEmpty()) {
-            return "";
-        }
-        RefrigerantSafety.Entry e = RefrigerantSafety.of(fluid);
-        List<String> lines = new ArrayList<>();
-        lines.add(Messages.format("cautions.intro", e.name(), e.group()));
-        if (hazards.contains(RefrigerantSafety.Hazard.HIGH_PRESSURE)) {
-            lines.add(Messages.get("cautions.pressure"));
-        }
-        if (hazards.contains(RefrigerantSafety.Hazard.FLAMMABLE)) {
-            lines.add(Messages.get("cautions.flammable"));
-        }
-        if (hazards.contains(RefrigerantSafety.Hazard.TOXIC)) {
-            lines.add(Messages.get("cautions.toxic"));
-        }
-        if (c.refrigerant().duty() == Duty.CONDENSER) {
-            lines.add(Messages.get("cautions.height"));
-        }
-        lines.add(Messages.get("cautions.codes"));
-        return String.join("\n", lines);
-    }
-
-    /** @return every caution, with the refrigerant table and its source */
     static String full() {
         StringBuilder b = new StringBuilder();
         b.append(Messages.get("cautions.fullIntro")).append("\n\n");
-        for (String k : List.of("cautions.pressure", "cautions.flammable", "cautions.toxic", "cautions.height")) {
-            b.append("\u2022 ").append(Messages.get(k)).append("\n");
+        List<String> names = new java.util.ArrayList<>(Fluids.names());
+        names.addAll(Fluids.blendNames());
+        for (String n : names) {
+            try {
+                Fluid f = Fluids.byName(n);
+                List<String> lines = org.finstack.study.Cautions.forFluid(f);
+                b.append(Messages.format("cautions.fluidLine", f.info().name(), f.info().safetyClass())).append("\n");
+                // the last two lines (work at height, codes govern) stand once at the end
+                for (String line : lines.subList(0, Math.max(0, lines.size() - 2))) {
+                    b.append("    \u2022 ").append(line).append("\n");
+                }
+            } catch (FinstackException e) {
+                b.append(n).append(": ").append(e.getMessage()).append("\n");
+            }
         }
-        b.append("\n").append(Messages.get("cautions.tableTitle")).append("\n");
-        RefrigerantSafety.table().values().forEach(e -> b.append(String.format(java.util.Locale.ROOT,
-                "  %-12s %-4s %s%n", e.name(), e.group(), e.hazards().isEmpty() ? "" : e.hazards().toString()
-                        .toLowerCase(java.util.Locale.ROOT).replace('_', ' '))));
-        b.append("\n").append(Messages.get("cautions.source")).append(" ").append(RefrigerantSafety.SOURCE.reference())
-                .append("\n\n").append(Messages.get("cautions.codes"));
+        b.append("\n").append(Messages.get("cautions.unsupportedTitle")).append("\n");
+        Fluids.unsupported().forEach((n, reason) -> b.append("  ").append(reason).append("\n"));
+        List<String> standing = org.finstack.study.Cautions.forFluid(Fluids.byName("R134a"));
+        b.append("\n").append(standing.get(standing.size() - 2)).append("\n\n")
+                .append(org.finstack.study.Cautions.GOVERNING);
         return b.toString();
     }
 }

@@ -6,15 +6,14 @@ import java.util.ArrayList;
 import java.util.Deque;
 import java.util.List;
 import java.util.Objects;
-import org.finstack.study.CoilModel;
 import org.finstack.study.Option;
 import org.finstack.study.Project;
 import org.finstack.units.UnitSystem;
 
 /**
  * The workbench's state, used on the event thread only: the project (an immutable record; every
- * edit replaces it), the selected option, the file, the unit system and the model, with undo and
- * redo of edits. Listeners hear of each change once.
+ * edit replaces it), the selected option, the file and the unit system, with undo and redo of
+ * edits (the rating model is part of the refrigerant side, so choosing it is an edit too). Listeners hear of each change once.
  */
 public final class ProjectModel {
 
@@ -51,7 +50,6 @@ public final class ProjectModel {
     private Path file;
     private boolean dirty;
     private UnitSystem units;
-    private CoilModel model = CoilModel.ISOTHERMAL;
 
     /**
      * @param project the project to start with
@@ -109,19 +107,6 @@ public final class ProjectModel {
     /** @return the unit system */
     public UnitSystem units() {
         return units;
-    }
-
-    /** @return the rating model */
-    public CoilModel model() {
-        return model;
-    }
-
-    /** @param m the rating model */
-    public void model(CoilModel m) {
-        if (m != model) {
-            model = m;
-            fire(Change.PROJECT);
-        }
     }
 
     /** @param u the unit system to show */

@@ -9,14 +9,18 @@ import java.util.function.Consumer;
 import javax.swing.SwingUtilities;
 import javax.swing.SwingWorker;
 import org.finstack.coil.CoilCase;
+import org.finstack.coil.CoilModels;
 import org.finstack.coil.Rating;
 import org.finstack.core.FinstackException;
-import org.finstack.study.CoilModel;
+import org.finstack.fluid.Fluids;
+import org.finstack.study.Cautions;
 import org.finstack.study.Project;
 
 /**
- * Rates every option of a project in a {@link SwingWorker}, never on the event thread, reporting
- * progress and honouring Cancel between options. A newer request supersedes an older one, whose
+ * Rates every option of a project in a {@link SwingWorker}, never on the event thread, each with
+ * the model its refrigerant side names ({@link CoilModels#rate}), reporting progress and honouring
+ * Cancel between options. The cautions for each option's refrigerant are gathered there too (the
+ * fluid's safety class comes from its data file). A newer request supersedes an older one, whose
  * results are dropped. It counts the ratings it ran and notes any that ran on the event thread,
  * so a test can check the rule.
  */
@@ -25,11 +29,15 @@ final class RatingRunner {
     /**
      * The outcome for one option.
      *
-     * @param ratedCase the case rated
+     * @param ratedCase the case rated, or null when the option could not become a case
      * @param rating    the rating, or null
      * @param error     the refusal, or null
+     * @param cautions  the cautions for the refrigerant ({@link Cautions#forFluid}), empty when it is unknown
      */
-    record Outcome(CoilCase ratedCase, Rating rating, FinstackException error) {
+    record Outcome(CoilCase ratedCase, Rating rating, FinstackException error, List<String> cautions) {
+        Outcome {
+            cautions = cautions == null ? List.of() : List.copyOf(cautions);
+        }
     }
 
     /** Hears of progress. */
@@ -68,10 +76,9 @@ final class RatingRunner {
      * Rates every option of a project.
      *
      * @param project the project
-     * @param model   the rating model
      * @param done    receives one outcome per option, on the event thread (not after Cancel)
      */
-    void rate(Project project, CoilModel model, Consumer<List<Outcome>> done) {
+    void rate(Project project, Consumer<List<Outcome>> done) {
         cancel();
         int mine = ++generation;
         SwingWorker<List<Outcome>, Void> w = new SwingWorker<>() {
@@ -86,9 +93,9 @@ final class RatingRunner {
                     CoilCase c = null;
                     try {
                         c = project.caseOf(i);
-                        out.add(new Outcome(c, rate(model, c), null));
+                        out.add(new Outcome(c, rate(c), null, cautions(c)));
                     } catch (FinstackException e) {
-                        out.add(new Outcome(c, null, e));
+                        out.add(new Outcome(c, null, e, cautions(c)));
                     }
                     setProgress((i + 1) * 100 / n);
                 }
@@ -123,12 +130,27 @@ final class RatingRunner {
         w.execute();
     }
 
-    private Rating rate(CoilModel model, CoilCase c) {
+    private Rating rate(CoilCase c) {
         if (SwingUtilities.isEventDispatchThread()) {
             ratingsOnEdt.incrementAndGet();
         }
         ratings.incrementAndGet();
-        return model.rate(c);
+        return CoilModels.rate(c);
+    }
+
+    /**
+     * @param c a case, or null
+     * @return the cautions for its refrigerant, or none when it is unknown (the rating says why)
+     */
+    static List<String> cautions(CoilCase c) {
+        if (c == null) {
+            return List.of();
+        }
+        try {
+            return Cautions.forFluid(Fluids.byName(c.refrigerant().fluid()));
+        } catch (FinstackException e) {
+            return List.of();
+        }
     }
 
     /** Stops the rating under way, if any; its results are dropped. */

@@ -82,6 +82,7 @@ public final class WorkbenchFrame extends JFrame {
     private final DrawingPanel drawing;
     private final ResultsPanel results = new ResultsPanel();
     private final ComparePanel compare = new ComparePanel();
+    private final CoilMapPanel coilMap = new CoilMapPanel();
     private final SweepPanel sweep;
     private final JTabbedPane tabs = new JTabbedPane();
     private final DefaultListModel<String> optionNames = new DefaultListModel<>();
@@ -133,7 +134,8 @@ public final class WorkbenchFrame extends JFrame {
         coilForm = new CoilForm(model, this::validityChanged);
         conditionsForm = new ConditionsForm(model, this::validityChanged);
         drawing = new DrawingPanel(() -> model.option().coil(), model::units);
-        sweep = new SweepPanel(() -> model.project().caseOf(model.selected()), model::model, model::units);
+        sweep = new SweepPanel(() -> model.project().caseOf(model.selected()),
+                () -> CoilModel.of(model.project().caseOf(model.selected())), model::units);
         sweep.onFailure(this::failure);
 
         int mask = Toolkit.getDefaultToolkit().getMenuShortcutKeyMaskEx();
@@ -152,7 +154,7 @@ public final class WorkbenchFrame extends JFrame {
         renameAction = action("rename", KeyStroke.getKeyStroke(KeyEvent.VK_F2, 0), e -> renameSelected());
         unitsAction = action("units", KeyStroke.getKeyStroke(KeyEvent.VK_U, mask), e -> model.units(
                 model.units() == UnitSystem.SI ? UnitSystem.US : UnitSystem.SI));
-        cautionsAction = action("cautions", null, e -> showText(Messages.get("cautions.title"), Cautions.full()));
+        cautionsAction = action("cautions", null, e -> showCautions());
         aboutAction = action("about", null, e -> showText(Messages.get("about.title"), aboutText()));
         quitAction = action("quit", KeyStroke.getKeyStroke(KeyEvent.VK_Q, mask), e -> close());
         exportDrawingAction = action("exportDrawing", null, e -> exportDrawing());
@@ -170,6 +172,7 @@ public final class WorkbenchFrame extends JFrame {
         tabs.addTab(Messages.get("tab.coil"), coilSplit);
         tabs.addTab(Messages.get("tab.conditions"), new JScrollPane(conditionsForm));
         tabs.addTab(Messages.get("tab.results"), new JScrollPane(results));
+        tabs.addTab(Messages.get("tab.coilMap"), coilMap);
         tabs.addTab(Messages.get("tab.compare"), compare);
         tabs.addTab(Messages.get("tab.sweeps"), sweep);
         JPanel right = new JPanel(new BorderLayout());
@@ -287,12 +290,12 @@ public final class WorkbenchFrame extends JFrame {
         }
         t.addSeparator();
         t.add(new JLabel(Messages.get("toolbar.model") + " "));
-        JComboBox<CoilModel> models = new JComboBox<>(CoilModel.values());
+        // the same list as the conditions form's chooser: choosing here edits the refrigerant side's model
+        JComboBox<CoilModel> models = new JComboBox<>(conditionsForm.models());
         models.setName("toolbar.model");
         models.setToolTipText(Messages.get("toolbar.model.tip"));
-        models.setRenderer(Form.renderer(v -> Messages.get("toolbar.model." + ((CoilModel) v).id())));
+        models.setRenderer(Form.renderer(v -> Messages.get("conditions.model." + ((CoilModel) v).id())));
         models.setMaximumSize(models.getPreferredSize());
-        models.addActionListener(e -> model.model((CoilModel) models.getSelectedItem()));
         t.add(models);
         t.addSeparator();
         t.add(new JLabel(Messages.get("toolbar.units") + " "));
@@ -373,6 +376,7 @@ public final class WorkbenchFrame extends JFrame {
             case UNITS -> {
                 coilForm.convertUnits();
                 conditionsForm.convertUnits();
+                coilMap.refresh(model.units());
                 sweep.convertUnits();
                 showOutcomes();
                 drawing.repaint();
@@ -454,7 +458,7 @@ public final class WorkbenchFrame extends JFrame {
             return;
         }
         results.headline(Messages.get("status.rating"));
-        runner.rate(model.project(), model.model(), list -> {
+        runner.rate(model.project(), list -> {
             outcomes = list;
             showOutcomes();
         });
@@ -466,13 +470,14 @@ public final class WorkbenchFrame extends JFrame {
         if (i < list.size()) {
             RatingRunner.Outcome o = list.get(i);
             if (o.rating() != null) {
-                results.show(model.option().name(), o.ratedCase(), o.rating(), model.units());
+                results.show(model.option().name(), o.ratedCase(), o.rating(), model.units(), o.cautions());
             } else if (o.error() != null) {
                 results.showInvalid(o.error().getMessage());
                 if (o.error() instanceof InputException ie) {
                     conditionsForm.markRatingError(ie);
                 }
             }
+            coilMap.show(o.ratedCase(), o.rating(), model.units());
         }
         List<Rating> ratings = new ArrayList<>();
         list.forEach(o -> ratings.add(o.rating()));
@@ -684,8 +689,7 @@ public final class WorkbenchFrame extends JFrame {
         b.append("\u2022 ").append(Quantities.SOURCE.key()).append(": ").append(Quantities.SOURCE.reference()).append("\n");
         Materials.library().references().values().forEach(c -> b.append("\u2022 ").append(c.key()).append(": ")
                 .append(c.reference()).append("\n"));
-        b.append("\u2022 ").append(RefrigerantSafety.SOURCE.key()).append(": ")
-                .append(RefrigerantSafety.SOURCE.reference()).append("\n");
+        b.append("\u2022 ").append(Messages.get("about.safety")).append("\n");
         return b.toString();
     }
 
@@ -714,6 +718,27 @@ public final class WorkbenchFrame extends JFrame {
         }
     }
 
+    /** Gathers every refrigerant's cautions off the event thread (it loads the fluids' data), then shows them. */
+    private void showCautions() {
+        new javax.swing.SwingWorker<String, Void>() {
+            @Override
+            protected String doInBackground() {
+                return Cautions.full();
+            }
+
+            @Override
+            protected void done() {
+                try {
+                    showText(Messages.get("cautions.title"), get());
+                } catch (InterruptedException e) {
+                    Thread.currentThread().interrupt();
+                } catch (java.util.concurrent.ExecutionException e) {
+                    failure(e.getCause());
+                }
+            }
+        }.execute();
+    }
+
     private void failure(Throwable t) {
         Thread th = Thread.currentThread();
         th.getUncaughtExceptionHandler().uncaughtException(th, t);
@@ -740,6 +765,10 @@ public final class WorkbenchFrame extends JFrame {
 
     ComparePanel compare() {
         return compare;
+    }
+
+    CoilMapPanel coilMap() {
+        return coilMap;
     }
 
     SweepPanel sweep() {

@@ -99,10 +99,24 @@ class SweepTest {
 
     @Test
     void modelRegistryRoundTripsItsIds() {
+        assertThat(CoilModel.values()).extracting(CoilModel::kind)
+                .containsExactly(org.finstack.coil.RefrigerantSide.Model.values());
         for (CoilModel m : CoilModel.values()) {
-            assertThat(CoilModel.byId("model", m.id())).isSameAs(m);
+            assertThat(CoilModel.byId("model", m.id())).isEqualTo(m);
         }
         assertThat(CoilModel.ISOTHERMAL.id()).isEqualTo(IsothermalCoilModel.ID);
+        assertThat(CoilModel.byId("model", "zones").id()).isEqualTo(org.finstack.coil.ZoneCoilModel.ID);
         assertThatThrownBy(() -> CoilModel.byId("model", "nonsense")).hasMessageStartingWith("model:");
+    }
+
+    @Test
+    void aZoneSweepPointIsTheDispatchersRatingOfTheChangedCase() {
+        CoilCase full = CaseFiles.read(Path.of("examples", "otterby-rooftop-condenser-full.json"));
+        CoilModel zones = CoilModel.of(full);
+        assertThat(zones.id()).isEqualTo("zones");
+        List<Sweep.Point> pts = Sweep.over(full, Sweep.Parameter.ROWS, new double[] {4}, zones, Progress.NONE);
+        assertThat(pts.get(0).rating().capacity())
+                .isEqualTo(org.finstack.coil.CoilModels.rate(full.withCoil(full.coil().withRows(4))).capacity());
+        assertThat(pts.get(0).rating().model()).isEqualTo("zones");
     }
 }

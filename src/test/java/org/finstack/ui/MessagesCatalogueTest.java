@@ -55,7 +55,7 @@ class MessagesCatalogueTest {
             keys.add("results.resistance." + k);
         }
         for (org.finstack.study.CoilModel m : org.finstack.study.CoilModel.values()) {
-            keys.add("toolbar.model." + m.id());
+            keys.add("conditions.model." + m.id());
         }
         for (org.finstack.geometry.Arrangement a : org.finstack.geometry.Arrangement.values()) {
             keys.add("coil.arrangement." + a.id());
@@ -67,9 +67,19 @@ class MessagesCatalogueTest {
                 "remove", "rename", "units", "cautions", "about", "quit", "exportDrawing", "openDemo")) {
             keys.add("action." + k);
         }
-        for (String k : List.of("capacity", "airIn", "airOut", "airPressureDrop", "airflow", "faceVelocity", "ua",
-                "ntu", "finEfficiency", "surfaceEffectiveness", "effectiveness", "airCoefficient")) {
+        for (String k : ResultsPanel.KEYS) {
             keys.add("results." + k);
+        }
+        for (ConditionsForm.TargetKind t : ConditionsForm.TargetKind.values()) {
+            keys.add("conditions.target." + t.name());
+        }
+        for (org.finstack.coil.RefrigerantSide.SaturationConvention c
+                : org.finstack.coil.RefrigerantSide.SaturationConvention.values()) {
+            keys.add("conditions.convention." + c.name());
+        }
+        for (String k : List.of("circuit", "row", "tube", "refrigerantIn", "refrigerantOut", "qualityIn", "qualityOut",
+                "airIn", "airOut", "duty")) {
+            keys.add("coilmap.column." + k);
         }
         for (String k : List.of("rows", "tubesPerRow", "tubeOuterDiameter", "tubeWall", "tubeMaterial", "finPitch",
                 "finThickness", "finMaterial", "coating", "finnedLength", "depth", "circuits", "capacity", "airOut",

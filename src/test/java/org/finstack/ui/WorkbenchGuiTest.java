@@ -23,7 +23,9 @@ import org.assertj.swing.timing.Condition;
 import org.assertj.swing.timing.Pause;
 import org.assertj.swing.timing.Timeout;
 import org.finstack.coil.CoilCase;
+import org.finstack.coil.CoilModels;
 import org.finstack.coil.IsothermalCoilModel;
+import org.finstack.coil.RefrigerantSide;
 import org.finstack.coil.Rating;
 import org.finstack.io.AtomicFiles;
 import org.finstack.io.CaseFiles;
@@ -42,9 +44,11 @@ import org.junit.jupiter.api.io.TempDir;
 /**
  * Drives the workbench as a user would (AssertJ Swing, from JUnit 5): the demo project opens and
  * rates, a field edit re-rates, a bad entry is marked and not rated, units switch, a project is
- * saved and reopened, options are compared and duplicated, a sweep is plotted and saved. The
- * reference for every capacity is {@link IsothermalCoilModel} run directly on the same case read
- * from the example case files. A repaint manager fails any Swing access off the event thread,
+ * saved and reopened, options are compared and duplicated, a sweep is plotted and saved, the zone
+ * model with a superheat target rates a wet evaporator, an unsupported blend is refused with its
+ * reason, the coil map paints a hand-built per-tube table. The reference for every capacity is
+ * the model run directly ({@link IsothermalCoilModel}, {@link CoilModels#rate}) on the same case
+ * read from the example case files. A repaint manager fails any Swing access off the event thread,
  * and every test checks that no rating ran on the event thread. Skipped without a display (CI
  * runs it under Xvfb). Screenshots of the main states go to target/screenshots.
  */
@@ -93,6 +97,7 @@ class WorkbenchGuiTest {
         Rating expected = new IsothermalCoilModel().rate(CaseFiles.read(EXAMPLES.resolve("otterby-rooftop-condenser.json")));
         shot("01-coil-form-and-drawing");
         window.tabbedPane("tabs").selectTab(2);
+        window.label("results.refrigerantOutlet").requireText(Messages.get("results.notModelled"));
         window.label("results.capacity").requireText(Quantities.format(expected.capacity(), Dimension.HEAT_FLOW,
                 UnitSystem.SI));
         assertThat(onEdt(() -> frame.results().rating().capacity())).isEqualTo(expected.capacity());
@@ -169,7 +174,7 @@ class WorkbenchGuiTest {
 
     @Test
     void sideBySideMarksTheCandidatesDifferences() throws IOException {
-        window.tabbedPane("tabs").selectTab(3);
+        window.tabbedPane("tabs").selectTab(4);
         JTable table = window.table("compare.table").target();
         Rating existing = new IsothermalCoilModel().rate(CaseFiles.read(EXAMPLES.resolve("otterby-rooftop-condenser.json")));
         Rating candidate = new IsothermalCoilModel().rate(
@@ -218,14 +223,16 @@ class WorkbenchGuiTest {
     @Test
     void aFlammableHighPressureRefrigerantShowsTheCautions() throws IOException {
         window.tabbedPane("tabs").selectTab(1);
-        window.comboBox("refrigerant.fluid").selectItem("R-32");
-        awaitCondition("R-32 set", () -> frame.model().project().conditions().refrigerant().fluid().equals("R-32"));
+        window.comboBox("refrigerant.fluid").selectItem("R32");
+        awaitCondition("R32 set", () -> frame.model().project().conditions().refrigerant().fluid().equals("R32"));
         awaitRated();
-        awaitCondition("cautions shown", () -> frame.results().hazards().contains(RefrigerantSafety.Hazard.FLAMMABLE));
+        // the cautions come from study.Cautions, fed by the fluid's own safety class (A2L for R32)
+        List<String> cautions = org.finstack.study.Cautions.forFluid(org.finstack.fluid.Fluids.byName("R32"));
+        awaitCondition("cautions shown", () -> frame.results().cautions().equals(cautions));
         window.tabbedPane("tabs").selectTab(2);
         window.textBox("results.cautions").requireVisible();
-        assertThat(window.textBox("results.cautions").text()).contains("High pressure").contains("Flammable")
-                .contains("work at height");
+        assertThat(window.textBox("results.cautions").text()).contains("high pressure").contains("flammable")
+                .contains("A2L").contains("work at height");
         // the isothermal model does not use the refrigerant's name: re-reading the shown (rounded)
         // conditions must not have moved the capacity
         Rating expected = new IsothermalCoilModel().rate(CaseFiles.read(EXAMPLES.resolve("otterby-rooftop-condenser.json")));
@@ -234,8 +241,125 @@ class WorkbenchGuiTest {
     }
 
     @Test
+    void anUnsupportedBlendCannotBeChosenAndSaysWhy() {
+        window.tabbedPane("tabs").selectTab(1);
+        window.comboBox("refrigerant.fluid").selectItem(java.util.regex.Pattern.compile("R454B .*"));
+        awaitCondition("refused", () -> frame.conditionsForm().markOf("refrigerant.fluid") != null);
+        assertThat(onEdt(() -> frame.conditionsForm().markOf("refrigerant.fluid"))).contains("mixture model");
+        assertThat(onEdt(() -> frame.model().project().conditions().refrigerant().fluid())).isEqualTo("R134a");
+        window.comboBox("refrigerant.fluid").requireSelection("R134a");
+    }
+
+    @Test
+    void zoneModelWithSuperheatRatesAWetEvaporatorAsTheModelDoes() throws IOException {
+        // the wet dairy-cooler example, on R134a (R-404A's transport properties are not in this
+        // build) and rated isothermally as it is imported, with a given film coefficient
+        String text = Files.readString(EXAMPLES.resolve("otterby-dairy-cooler-wet.json"))
+                .replace("\"R404A\"", "\"R134a\"")
+                .replace("\"superheat\": \"6 K\", \"model\": \"zones\"", "\"insideCoefficient\": \"1800 W/(m2 K)\"");
+        Path wet = dir.resolve("dairy-cooler-r134a.json");
+        Files.writeString(wet, text);
+        CoilCase imported = CaseFiles.read(wet);
+        assertThat(imported.refrigerant().model()).isEqualTo(RefrigerantSide.Model.ISOTHERMAL);
+        assertThat(onEdt(() -> frame.importCase(wet))).isTrue();
+        awaitRated();
+        window.tabbedPane("tabs").selectTab(1);
+        // choose the zone model: without a target it is refused, marked at the target chooser
+        window.comboBox("toolbar.model").selectItem(1);
+        awaitCondition("target marked", () -> frame.conditionsForm().markOf("refrigerant.target") != null);
+        assertThat(onEdt(() -> frame.conditionsForm().markOf("refrigerant.target"))).contains("superheat")
+                .contains("zones model");
+        shot("09-zone-model-needs-a-target");
+        window.comboBox("refrigerant.target").selectItem(1);
+        window.textBox("refrigerant.superheat").setText("6 K");
+        window.textBox("refrigerant.insideCoefficient").setText("");
+        RefrigerantSide r = imported.refrigerant();
+        CoilCase expectedCase = imported.withRefrigerant(new RefrigerantSide(r.fluid(), r.duty(),
+                r.saturationTemperature(), r.convention(), 0, r.liquidTemperature(), 0,
+                new RefrigerantSide.Target.Superheat(6), RefrigerantSide.Model.ZONES, r.segments()));
+        Rating expected = CoilModels.rate(expectedCase);
+        awaitCondition("zone rating", () -> frame.results().rating() != null && !frame.busy()
+                && frame.results().rating().model().equals("zones")
+                && frame.results().rating().capacity() == expected.capacity());
+        assertThat(onEdt(() -> frame.model().option().caseUnder(frame.model().project().conditions())))
+                .isEqualTo(expectedCase);
+        window.tabbedPane("tabs").selectTab(2);
+        window.label("results.capacity").requireText(Quantities.format(expected.capacity(), Dimension.HEAT_FLOW,
+                UnitSystem.SI));
+        assertThat(expected.moisture().latentCapacity()).isPositive();
+        window.label("results.sensible").requireText(Quantities.format(expected.moisture().sensibleCapacity(),
+                Dimension.HEAT_FLOW, UnitSystem.SI));
+        window.label("results.latent").requireText(Quantities.format(expected.moisture().latentCapacity(),
+                Dimension.HEAT_FLOW, UnitSystem.SI));
+        window.label("results.refrigerantOutlet").requireText(java.util.regex.Pattern.compile("superheat .*"));
+        window.label("results.td").requireText(Quantities.format(org.finstack.io.RatingJson.temperatureDifference(
+                expected), Dimension.TEMPERATURE_DIFFERENCE, UnitSystem.SI));
+        assertThat(window.textBox("results.tdBasis").text()).contains(org.finstack.io.RatingJson.TD_BASIS);
+        shot("10-zone-model-wet-evaporator");
+        // the tube-by-tube model: rated when it is in the build, else refused with the reason at the chooser
+        window.tabbedPane("tabs").selectTab(1);
+        window.comboBox("refrigerant.model").selectItem(2);
+        awaitCondition("tube model answered", () -> !frame.busy() && frame.outcomes().size() == 3
+                && frame.outcomes().get(2).ratedCase() != null
+                && frame.outcomes().get(2).ratedCase().refrigerant().model() == RefrigerantSide.Model.TUBES);
+        RatingRunner.Outcome tubes = onEdt(() -> frame.outcomes().get(2));
+        if (tubes.rating() == null) {
+            assertThat(tubes.error().getMessage()).startsWith("refrigerant.model");
+            assertThat(onEdt(() -> frame.conditionsForm().markOf("refrigerant.model"))).isNotNull();
+            window.label("summary").requireText(java.util.regex.Pattern.compile("Not rated.*"));
+        } else {
+            assertThat(tubes.rating().tubes()).isNotEmpty();
+            assertThat(onEdt(() -> frame.coilMap().rating())).isNotNull();
+        }
+    }
+
+    @Test
+    void coilMapShowsAHandBuiltTubeTable() {
+        CoilCase c = CaseFiles.read(EXAMPLES.resolve("otterby-rooftop-condenser.json"));
+        Rating base = new IsothermalCoilModel().rate(c);
+        assertThat(onEdt(() -> frame.coilMap().rating())).as("no tubes from the isothermal model").isNull();
+        List<Rating.TubeResult> tubes = new java.util.ArrayList<>();
+        org.finstack.coil.Circuiting circuiting = c.effectiveCircuiting();
+        for (int k = 0; k < circuiting.count(); k++) {
+            List<org.finstack.coil.Circuiting.Tube> path = circuiting.circuits().get(k);
+            for (int i = 0; i < path.size(); i++) {
+                double q = i < 2 ? -1 : 1 - (double) i / path.size();
+                tubes.add(new Rating.TubeResult(k, path.get(i).row(), path.get(i).position(), 340 - 2.0 * i,
+                        340 - 2.0 * (i + 1), q, q < 0 ? -1 : q - 0.05, 305, 309, 110));
+            }
+        }
+        Rating handBuilt = new Rating("tubes", base.duty(), base.capacity(), base.airInletTemperature(),
+                base.airOutletTemperature(), base.airMassFlow(), base.airVolumeFlow(), base.faceVelocity(),
+                base.airPressureDrop(), base.geometry(), base.maxVelocity(), base.reynoldsDc(), base.colburnJ(),
+                base.frictionF(), base.airCoefficient(), base.finEfficiency(), base.surfaceEffectiveness(),
+                base.resistances(), base.ntu(), base.effectiveness(), base.airProperties(), base.warnings(),
+                base.methods(), base.moisture(), null, List.of(), tubes);
+        window.tabbedPane("tabs").selectTab(3);
+        GuiActionRunner.execute(() -> frame.coilMap().show(c, handBuilt, UnitSystem.SI));
+        window.table("coilmap.table").requireRowCount(48);
+        BufferedImage img = onEdt(() -> frame.coilMap().image(600, 560));
+        org.finstack.ui.draw.TubeSheetView.Layout l = org.finstack.ui.draw.CoilMap.layout(c.coil(),
+                CoilMapPanel.area(600, 560));
+        org.finstack.ui.draw.CoilMap.Scale scale = org.finstack.ui.draw.CoilMap.scale(tubes,
+                org.finstack.ui.draw.CoilMap.Colouring.TEMPERATURE);
+        for (Rating.TubeResult t : tubes) {
+            java.awt.geom.Point2D p = l.centre(t.row(), t.position());
+            assertThat(new java.awt.Color(img.getRGB((int) Math.round(p.getX()), (int) Math.round(p.getY()))))
+                    .isEqualTo(scale.colour((t.refrigerantInTemperature() + t.refrigerantOutTemperature()) / 2));
+        }
+        shot("11-coil-map-temperature");
+        window.radioButton("coilmap.byQuality").click();
+        awaitCondition("by quality", () -> frame.coilMap().colouring() == org.finstack.ui.draw.CoilMap.Colouring.QUALITY);
+        BufferedImage q = onEdt(() -> frame.coilMap().image(600, 560));
+        java.awt.geom.Point2D first = l.centre(tubes.get(0).row(), tubes.get(0).position());
+        assertThat(new java.awt.Color(q.getRGB((int) Math.round(first.getX()), (int) Math.round(first.getY()))))
+                .isEqualTo(org.finstack.ui.draw.CoilMap.SINGLE_PHASE);
+        shot("12-coil-map-quality");
+    }
+
+    @Test
     void finDensitySweepIsPlottedAndSavedAsPngAndSvg() throws IOException {
-        window.tabbedPane("tabs").selectTab(4);
+        window.tabbedPane("tabs").selectTab(5);
         window.comboBox("sweep.parameter").selectItem(0);
         window.button("sweep.run").click();
         awaitCondition("sweep done", () -> frame.sweep().points() != null && !frame.sweep().running());
