@@ -776,9 +776,8 @@ public final class TubeCoilModel {
             Rating.RefrigerantResult ref = new Rating.RefrigerantResult(s.fluid().name(), o.massFlow, o.inletPressure,
                     pOut, in.temperature(), out.temperature(), o.inletEnthalpy, o.outletEnthalpy,
                     out.twoPhase() ? out.quality() : -1, superheat, subcool,
-                    evaporator ? satIn.dewTemperature() - satOut.dewTemperature()
-                            : -(satIn.dewTemperature() - satOut.dewTemperature()),
-                    o.pass.charge, balance, circuitResults);
+                    satIn.dewTemperature() - satOut.dewTemperature(), o.pass.charge, balance, circuitResults,
+                    satIn.dewTemperature(), satOut.dewTemperature());
             List<Rating.TubeResult> tubeResults = new ArrayList<>();
             for (TubeState t : o.pass.tubeStates) {
                 tubeResults.add(new Rating.TubeResult(t.circuit, t.tube.row(), t.tube.position(), t.tIn, t.tOut, t.xIn,
