@@ -9,6 +9,8 @@ import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.finstack.coil.CoilBenchmark;
+import org.finstack.study.search.SearchBenchmark;
+import org.finstack.study.uncertainty.UncertaintyBand;
 import org.finstack.core.InputException;
 import org.finstack.fluid.table.TableBenchmark;
 import picocli.CommandLine.Command;
@@ -26,6 +28,20 @@ final class BenchCommand implements Callable<Integer> {
 
     /** Segment counts at which the tube-by-tube model is timed, to show how its time grows. */
     private static final int[] SEGMENTS = {5, 10, 20};
+
+    /** Monte Carlo samples of the timed uncertainty band. */
+    private static final int BAND_SAMPLES = 50;
+
+    private static org.finstack.study.Project demoProject() throws java.io.IOException {
+        String resource = "/examples/projects/otterby-condenser-options.finstack.json";
+        try (java.io.InputStream in = BenchCommand.class.getResourceAsStream(resource)) {
+            if (in == null) {
+                throw new IllegalStateException("demo project missing from the jar: " + resource);
+            }
+            return org.finstack.io.ProjectFiles.parse(new String(in.readAllBytes(), java.nio.charset.StandardCharsets.UTF_8),
+                    "demo project");
+        }
+    }
 
     @Spec
     private CommandSpec spec;
@@ -47,7 +63,7 @@ final class BenchCommand implements Callable<Integer> {
     @Option(names = "--json", description = "print one JSON object")
     private boolean json;
 
-    @Option(names = "--coil-runs", paramLabel = "N", defaultValue = "11",
+    @Option(names = "--coil-runs", paramLabel = "N", defaultValue = "5",
             description = "ratings per median for the coil models (default ${DEFAULT-VALUE}; 0 skips them)")
     private int coilRuns;
 
@@ -64,6 +80,11 @@ final class BenchCommand implements Callable<Integer> {
         }
         TableBenchmark.Result r = TableBenchmark.run(settings);
         CoilBenchmark.Result coils = coilRuns == 0 ? null : CoilBenchmark.run(coilRuns, SEGMENTS);
+        SearchBenchmark.Result search = coilRuns == 0 ? null
+                : SearchBenchmark.candidatesPerSecond(demoProject(), Runtime.getRuntime().availableProcessors(), 1.0);
+        UncertaintyBand.Timing band = coilRuns == 0 ? null
+                : UncertaintyBand.time(CoilBenchmark.benchmarkCase(org.finstack.coil.RefrigerantSide.Model.ZONES, 10),
+                        BAND_SAMPLES, 1);
         PrintWriter out = spec.commandLine().getOut();
         if (json) {
             ObjectNode root = JsonNodeFactory.instance.objectNode();
@@ -85,6 +106,9 @@ final class BenchCommand implements Callable<Integer> {
                     seg.addObject().put("segments", coils.segments()[i]).put("median_ms", coils.tubeMedianMsBySegments()[i]);
                 }
                 res.put("coilRuns", coils.runs());
+                res.put("searchCandidatesPerSecond", search.candidatesPerSecond());
+                res.put("uncertaintyBand_ms", band.seconds() * 1000);
+                res.put("uncertaintyBandSamples", BAND_SAMPLES);
             }
             ArrayNode per = res.putArray("perFluid");
             for (TableBenchmark.FluidResult f : r.fluids()) {
@@ -123,6 +147,10 @@ final class BenchCommand implements Callable<Integer> {
                     out.printf(Locale.ROOT, "  tube-by-tube, %2d segments/tube  %8.2f ms%n", coils.segments()[i],
                             coils.tubeMedianMsBySegments()[i]);
                 }
+                out.printf(Locale.ROOT, "  uncertainty band, %d samples (zone model) %8.0f ms%n", BAND_SAMPLES,
+                        band.seconds() * 1000);
+                out.printf(Locale.ROOT, "  candidate search (demo project, isothermal)  %8.0f candidates/s%n",
+                        search.candidatesPerSecond());
             }
         }
         return 0;

@@ -21,7 +21,7 @@ class BenchCommandTest {
         JsonNode res = new ObjectMapper().readTree(r.out()).get("results");
         for (String k : new String[] {"eosCallsPerSecond", "tableCallsPerSecond", "tableSpeedup", "fluids",
             "pointsPerFluid", "eosCalls", "tableCalls", "perFluid", "zoneRatingMedian_ms", "tubeRatingMedian_ms",
-            "tubeRatingBySegments"}) {
+            "tubeRatingBySegments", "searchCandidatesPerSecond", "uncertaintyBand_ms"}) {
             assertThat(res.has(k)).as(k).isTrue();
         }
         double speedup = res.get("tableSpeedup").asDouble();
