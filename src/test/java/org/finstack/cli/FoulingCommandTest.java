@@ -12,7 +12,7 @@ import org.junit.jupiter.api.io.TempDir;
 
 /**
  * The {@code fouling} command: the documented JSON keys, the inferred level, the note without a
- * fan, and one-line errors with status 2 (the project's input contract).
+ * fan, and one-line errors with status 2 (an invariant: the project's input contract).
  */
 class FoulingCommandTest {
 

@@ -7,7 +7,7 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import java.io.IOException;
 import org.junit.jupiter.api.Test;
 
-/** The {@code frost} command: the documented JSON keys, no frost on a warm coil, one-line errors. */
+/** The {@code frost} command: the documented JSON keys, no frost on a warm coil (common practice), one-line errors (invariant of the input contract). */
 class FrostCommandTest {
 
     static final String EXAMPLE = "examples/marrowfield-chill-evaporator-frost-fan.json";

@@ -11,7 +11,7 @@ import org.apache.pdfbox.text.PDFTextStripper;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
-/** {@code finstack report}: writes a one-page PDF and an HTML page; without an output it says so. */
+/** {@code finstack report}: writes a one-page PDF and an HTML page; without an output it says so (invariants of the command; the numbers are checked against single ratings as reference in PdfReportTest). */
 class ReportCommandTest {
 
     @TempDir

@@ -13,7 +13,7 @@ import org.junit.jupiter.api.Test;
  * Smoke test of a blend through the coil model: the zone model rates an evaporator with the
  * zeotropic blend R407C (pseudo-pure, its transport properties from the blend correlations) and
  * meets the product's requirements for any refrigerant: outlet superheat target within 0.1 K,
- * energy balance within 0.1 %, no value that is not finite.
+ * energy balance within 0.1 %, no value that is not finite (invariants the product issue states).
  */
 class BlendRatingTest {
 

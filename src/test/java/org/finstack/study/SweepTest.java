@@ -16,7 +16,8 @@ import org.junit.jupiter.api.Test;
 /**
  * Sweeps: each point is the rating model's own result for the changed case, trends go the way
  * the physics says (more fins, rows, air or a clean coil carry more heat), an impossible value
- * gives a point with its reason, and a cancelled sweep stops.
+ * gives a point with its reason, and a cancelled sweep stops (the rating model is the reference;
+ * the trends are common practice).
  */
 class SweepTest {
 

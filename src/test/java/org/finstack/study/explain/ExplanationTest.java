@@ -16,7 +16,8 @@ import org.junit.jupiter.api.Test;
 
 /**
  * The explanations are deterministic and carry no invented numbers: every percentage in them is
- * one of the computed shares or changes, rounded as the class says.
+ * one of the computed shares or changes, rounded as the class says (invariants; the reference is
+ * the rating itself).
  */
 class ExplanationTest {
 

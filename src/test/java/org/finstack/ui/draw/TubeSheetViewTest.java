@@ -20,7 +20,8 @@ import org.junit.jupiter.api.Test;
 /**
  * The drawings paint to a plain {@link BufferedImage} with no window, and their pixels say what
  * the geometry says: a tube's colour at each tube centre the pattern gives, fin plate between
- * tubes, staggered rows shifted by half a pitch, circuits sharing the tubes evenly.
+ * tubes, staggered rows shifted by half a pitch, circuits sharing the tubes evenly (invariants of
+ * the drawing against the geometry as reference).
  */
 class TubeSheetViewTest {
 
