@@ -103,7 +103,7 @@ public final class Sweep {
     }
 
     /**
-     * Sweeps a numeric parameter with the standard model and no progress reports.
+     * Sweeps a numeric parameter with the model the case names and no progress reports.
      *
      * @param base   the case to vary
      * @param p      the parameter
@@ -111,7 +111,7 @@ public final class Sweep {
      * @return one point per value, in order
      */
     public static List<Point> over(CoilCase base, Parameter p, double[] values) {
-        return over(base, p, values, CoilModel.ISOTHERMAL, Progress.NONE);
+        return over(base, p, values, CoilModel.of(base), Progress.NONE);
     }
 
     /**
