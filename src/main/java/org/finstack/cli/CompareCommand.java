@@ -7,8 +7,6 @@ import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.IOException;
 import java.io.PrintWriter;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -92,12 +90,7 @@ final class CompareCommand implements Callable<Integer> {
      * set aside with their reasons, so the rest can still be compared.
      */
     static Loaded load(Path file) {
-        String text;
-        try {
-            text = Files.readString(file, StandardCharsets.UTF_8);
-        } catch (IOException e) {
-            throw new InputException(file.toString(), Msg.FILE_UNREADABLE, file, e.getMessage());
-        }
+        String text = org.finstack.io.TextFiles.read(file);
         String origin = file.getFileName().toString();
         try {
             return new Loaded(ProjectFiles.parse(text, origin), List.of());

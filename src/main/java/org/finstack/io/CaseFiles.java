@@ -4,10 +4,6 @@ import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.DeserializationFeature;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
-import java.io.IOException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
-import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
@@ -82,14 +78,7 @@ public final class CaseFiles {
      * @throws InputException naming the field (or the file) and the reason
      */
     public static CoilCase read(Path file) {
-        String text;
-        try {
-            text = Files.readString(file, StandardCharsets.UTF_8);
-        } catch (NoSuchFileException e) {
-            throw new InputException(file.toString(), Msg.FILE_UNREADABLE, file, "no such file");
-        } catch (IOException e) {
-            throw new InputException(file.toString(), Msg.FILE_UNREADABLE, file, e.getMessage());
-        }
+        String text = TextFiles.read(file);
         return parse(text, file.getFileName().toString());
     }
 

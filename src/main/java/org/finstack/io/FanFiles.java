@@ -1,10 +1,6 @@
 package org.finstack.io;
 
 import com.fasterxml.jackson.databind.JsonNode;
-import java.io.IOException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
-import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.Locale;
 import java.util.Optional;
@@ -45,14 +41,7 @@ public final class FanFiles {
      * @return its fan, or empty when it has none
      */
     public static Optional<CoilFan> read(Path file) {
-        String text;
-        try {
-            text = Files.readString(file, StandardCharsets.UTF_8);
-        } catch (NoSuchFileException e) {
-            throw new InputException(file.toString(), Msg.FILE_UNREADABLE, file, "no such file");
-        } catch (IOException e) {
-            throw new InputException(file.toString(), Msg.FILE_UNREADABLE, file, e.getMessage());
-        }
+        String text = TextFiles.read(file);
         return parse(text, file.getFileName().toString());
     }
 

@@ -2,10 +2,6 @@ package org.finstack.io;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
-import java.io.IOException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
-import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Set;
@@ -84,14 +80,7 @@ public final class MeasurementFiles {
      * @throws InputException naming the field (or the file) and the reason
      */
     public static MeasurementFile read(Path file) {
-        String text;
-        try {
-            text = Files.readString(file, StandardCharsets.UTF_8);
-        } catch (NoSuchFileException e) {
-            throw new InputException(file.toString(), Msg.FILE_UNREADABLE, file, "no such file");
-        } catch (IOException e) {
-            throw new InputException(file.toString(), Msg.FILE_UNREADABLE, file, e.getMessage());
-        }
+        String text = TextFiles.read(file);
         return parse(text, file.getFileName().toString());
     }
 

@@ -11,8 +11,6 @@ import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.math.BigDecimal;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
-import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -79,14 +77,7 @@ public final class ProjectFiles {
      *                        newer format version, an unknown key or a bad value
      */
     public static Project read(Path file) {
-        String text;
-        try {
-            text = Files.readString(file, StandardCharsets.UTF_8);
-        } catch (NoSuchFileException e) {
-            throw new InputException(file.toString(), Msg.FILE_UNREADABLE, file, "no such file");
-        } catch (IOException e) {
-            throw new InputException(file.toString(), Msg.FILE_UNREADABLE, file, e.getMessage());
-        }
+        String text = TextFiles.read(file);
         return parse(text, file.getFileName().toString());
     }
 
