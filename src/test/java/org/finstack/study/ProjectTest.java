@@ -18,7 +18,8 @@ import org.junit.jupiter.api.Test;
 /**
  * Projects: options are addressed existing-first, edits make new records, overrides replace whole
  * parts; the full refrigerant side (version-2 case-file keys) survives a save and a read; a
- * version-1 project is written back without the new keys.
+ * version-1 project is written back without the new keys (invariants of the project format; the
+ * case files under examples/ are the reference the parts are read against).
  */
 class ProjectTest {
 

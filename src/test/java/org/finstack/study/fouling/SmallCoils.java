@@ -6,7 +6,8 @@ import org.finstack.io.CaseFiles;
 
 /**
  * Small zone-model cases for the fouling and frost tests (invented coils; kept small so each
- * rating is quick).
+ * rating is quick); dimensions are the trade's usual 3/8 in pattern (common practice), and the
+ * checks that use them are invariants (trends), not values.
  */
 public final class SmallCoils {
 

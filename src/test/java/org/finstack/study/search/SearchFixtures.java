@@ -6,7 +6,7 @@ import org.finstack.io.ProjectFiles;
 import org.finstack.material.Materials;
 import org.finstack.study.Project;
 
-/** Projects and small search spaces shared by the search tests (kept small so the tests stay quick); the patterns are the library's common-practice ones. */
+/** Projects and small search spaces shared by the search tests (kept small so the tests stay quick); the patterns are the library's (common practice). */
 final class SearchFixtures {
 
     /** The demo project: R-134a condenser, isothermal model, 950 x 420 x 100 mm opening, 4 circuits, 7 kW. */
