@@ -20,7 +20,7 @@ public final class SmallCoils {
      * @param rh           relative humidity [-]
      * @param saturationC  saturation temperature [C]
      * @param finType      fin type ("plain" or "louvered")
-     * @return a 3-row, 8-tube R-404A evaporator, 0.6 m finned length, on the zone model
+     * @return a 3-row, 8-tube R-134a evaporator, 0.6 m finned length, on the zone model
      */
     public static CoilCase evaporator(double fpi, double airC, double rh, double saturationC, String finType) {
         String fluid = "R134a";
