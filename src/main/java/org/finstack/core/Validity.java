@@ -78,6 +78,9 @@ public final class Validity {
         if (l.contains(value)) {
             return true;
         }
+        if (!warnings.keeps()) {
+            return false;
+        }
         String unit = l.unit().isEmpty() ? "" : " " + l.unit();
         warnings.add(String.format(Locale.ROOT, "%s: %s = %s%s is outside the %s %s to %s%s",
                 method, variable, Numbers.brief(value), unit, basis, Numbers.brief(l.min()),

@@ -31,8 +31,19 @@ public final class Warnings {
         }
     }
 
+    /**
+     * @return whether this collector keeps what it is given (a discarding one lets callers skip
+     *         composing the text)
+     */
+    public boolean keeps() {
+        return keep;
+    }
+
     /** @param other warnings to take over */
     public void addAll(Warnings other) {
+        if (!keep) {
+            return;
+        }
         items.addAll(other.items);
     }
 
@@ -48,9 +59,12 @@ public final class Warnings {
 
     /** @return a warnings collector that drops everything (for inner iterations) */
     public static Warnings discard() {
-        // used inside solver iterations, whose warnings are raised again on the converged state
-        return new Warnings(false);
+        // used inside solver iterations, whose warnings are raised again on the converged state;
+        // one shared instance, which nothing ever changes
+        return DISCARD;
     }
+
+    private static final Warnings DISCARD = new Warnings(false);
 
     @Override
     public String toString() {

@@ -48,9 +48,11 @@ public final class Dryout {
             return c.wetWall(p, f, w);
         }
         BoilingCorrelation.requireHeatFlux(f);
-        w.add(String.format(Locale.ROOT, "%s: quality %.3f is above the dryout onset %.2f; the coefficient is"
-                + " interpolated linearly to the vapour-only value at x = 1 (common practice)",
-                c.source().key(), x, ONSET_QUALITY));
+        if (w.keeps()) {
+            w.add(String.format(Locale.ROOT, "%s: quality %.3f is above the dryout onset %.2f; the coefficient is"
+                    + " interpolated linearly to the vapour-only value at x = 1 (common practice)",
+                    c.source().key(), x, ONSET_QUALITY));
+        }
         double hOnset = c.wetWall(p, f.withQuality(ONSET_QUALITY), w);
         double hv = vapourOnly(p, f, w);
         return hOnset + (x - ONSET_QUALITY) / (1 - ONSET_QUALITY) * (hv - hOnset);

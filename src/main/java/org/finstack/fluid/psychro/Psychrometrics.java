@@ -146,8 +146,11 @@ public final class Psychrometrics {
      * @throws OutOfRangeException if p<sub>ws</sub>(T) &ge; p (water boils: air cannot be saturated)
      */
     public static double saturationHumidityRatio(double temperature, double pressure) {
+        return saturationHumidityRatio(temperature, saturationPressure(temperature), pressure);
+    }
+
+    private static double saturationHumidityRatio(double temperature, double pws, double pressure) {
         Check.positive("pressure", pressure);
-        double pws = saturationPressure(temperature);
         if (!(pws < pressure)) {
             throw new OutOfRangeException(Msg.FLUID_OUT_OF_RANGE, "moist air", "temperature [K]",
                     temperature, "below the boiling point at " + Numbers.brief(pressure) + " Pa");
@@ -385,9 +388,9 @@ public final class Psychrometrics {
      * @return dh<sub>s</sub>/dT [J/(kg dry air K)]
      */
     public static double saturatedEnthalpySlope(double temperature, double pressure) {
-        double ws = saturationHumidityRatio(temperature, pressure);
         double pws = saturationPressure(temperature);
-        double dpws = saturationPressureSlope(temperature);
+        double ws = saturationHumidityRatio(temperature, pws, pressure);
+        double dpws = pws * HylandWexler1983SaturationPressure.lnPressureSlope(temperature);
         double dws = EPSILON * pressure * dpws / ((pressure - pws) * (pressure - pws));
         double t = temperature - ZERO_CELSIUS;
         return CP_DRY_AIR + CP_VAPOUR * ws + (H_VAPOUR_0C + CP_VAPOUR * t) * dws;
