@@ -80,7 +80,9 @@ public final class SegmentExchange {
                 * Math.min(cAir, refrigerantCapacity) * (tA - refrigerantIn);
         double tSurface = refrigerantIn + (tA - refrigerantIn) * rIn / (rIn + rAir);
         double tDryOut = tA - q / cAir;
-        if (refrigerantIn >= tA || airIn.humidityRatio() <= 0 || tSurface >= airIn.dewPoint()) {
+        // the surface stays dry where it is not below the dew point: W_s(T_surface) >= W (W_s rises with T)
+        if (refrigerantIn >= tA || airIn.humidityRatio() <= 0 || tSurface >= tA
+                || Psychrometrics.saturationHumidityRatio(tSurface, airIn.pressure()) >= airIn.humidityRatio()) {
             return new Result(q, new MoistAirState(tDryOut, airIn.humidityRatio(), airIn.pressure()), 0, false,
                     tSurface, ua);
         }
@@ -103,7 +105,13 @@ public final class SegmentExchange {
         double ao = s.derived().airSideArea() * fraction;
         double hsR = Psychrometrics.saturatedEnthalpy(tR, p);
         double coatingR = s.coil().coating() == null ? 0 : s.coil().coating().resistance(s.coil().coatingThickness());
+        // the effective surface temperature solves g(T) = T_eff(T) - T = 0; g falls with T. Plain
+        // substitution first, then secant steps kept inside the bracket the signs of g give
         double tS = tSurfaceStart;
+        double below = Double.NEGATIVE_INFINITY;
+        double above = Double.POSITIVE_INFINITY;
+        double lastT = Double.NaN;
+        double lastG = Double.NaN;
         for (int i = 0; ; i++) {
             double hsS = Psychrometrics.saturatedEnthalpy(tS, p);
             double bW = Psychrometrics.saturatedEnthalpySlope(tS, p);
@@ -119,22 +127,36 @@ public final class SegmentExchange {
             double hOut = hIn - q / mAir;
             double ntuO = 1 / (filmSide * mAir);
             double hsEff = hIn - (hIn - hOut) / -Math.expm1(-ntuO);
-            double tEff = temperatureOfSaturatedEnthalpy(hsEff, p, tR, airIn.dryBulb());
-            if (Math.abs(tEff - tS) <= TOLERANCE_K) {
+            double tEff = newtonFrom(tS, hsS, bW, hsEff, p, tR, airIn.dryBulb());
+            double g = tEff - tS;
+            if (Math.abs(g) <= TOLERANCE_K) {
                 double wEff = Psychrometrics.saturationHumidityRatio(tEff, p);
                 double wOut = Math.max(wEff, Math.min(wIn, wEff + (wIn - wEff) * Math.exp(-ntuO)));
                 double tOut = Psychrometrics.dryBulbFromEnthalpy(hOut, wOut);
                 if (wOut > Psychrometrics.saturationHumidityRatio(tOut, p)) {
-                    tOut = temperatureOfSaturatedEnthalpy(hOut, p, tR, airIn.dryBulb());
+                    tOut = temperatureOfSaturatedEnthalpy(hOut, p, tR, airIn.dryBulb(), tEff);
                     wOut = Psychrometrics.saturationHumidityRatio(tOut, p);
                 }
                 return new Result(q, new MoistAirState(tOut, wOut, p), mAir * (wIn - wOut), true, tEff, ua);
             }
             if (i >= MAX_ITERATIONS) {
-                throw new ConvergenceException("wet-surface temperature", i, Math.abs(tEff - tS));
+                throw new ConvergenceException("wet-surface temperature", i, Math.abs(g));
             }
-            // plain substitution first; damped once it has had a few steps (it can oscillate on thin, wet coils)
-            tS = i < 6 ? tEff : 0.5 * (tS + tEff);
+            if (g > 0) {
+                below = Math.max(below, tS);
+            } else {
+                above = Math.min(above, tS);
+            }
+            double next = tEff;
+            if (!Double.isNaN(lastG) && g != lastG) {
+                next = tS - g * (tS - lastT) / (g - lastG);
+            }
+            if (!(next > below && next < above)) {
+                next = Double.isInfinite(below) || Double.isInfinite(above) ? tEff : 0.5 * (below + above);
+            }
+            lastT = tS;
+            lastG = g;
+            tS = next;
         }
     }
 
@@ -148,20 +170,49 @@ public final class SegmentExchange {
                 : FlowArrangement.CROSSFLOW_CMIN_MIXED, ntu, cr);
     }
 
-    /** Bounded bisection for the temperature whose saturated-air enthalpy is h. */
-    static double temperatureOfSaturatedEnthalpy(double h, double p, double low, double high) {
+    /**
+     * The temperature whose saturated-air enthalpy is h, between {@code low - 1} and
+     * {@code high + 1} K: Newton steps on h_s(T) from a guess, kept inside a bracket that shrinks
+     * with every step (a bisection step where Newton would leave it), to 1e-9 K.
+     *
+     * @param h     saturated-air enthalpy [J/kg dry air]
+     * @param p     barometric pressure [Pa]
+     * @param low   lower end of the search [K] (less 1 K)
+     * @param high  upper end [K] (plus 1 K)
+     * @param guess first trial [K]
+     * @return [K]
+     */
+    static double temperatureOfSaturatedEnthalpy(double h, double p, double low, double high, double guess) {
+        double t = Math.min(high + 1, Math.max(low - 1, guess));
+        return newtonFrom(t, Psychrometrics.saturatedEnthalpy(t, p), Psychrometrics.saturatedEnthalpySlope(t, p), h, p,
+                low, high);
+    }
+
+    /** As {@link #temperatureOfSaturatedEnthalpy}, from a first trial whose h_s and slope are known. */
+    private static double newtonFrom(double t0, double hs0, double slope0, double h, double p, double low,
+            double high) {
         double lo = low - 1;
         double hi = high + 1;
+        double t = Math.min(hi, Math.max(lo, t0));
+        double hs = t == t0 ? hs0 : Psychrometrics.saturatedEnthalpy(t, p);
+        double slope = t == t0 ? slope0 : Psychrometrics.saturatedEnthalpySlope(t, p);
         for (int i = 0; i < 200; i++) {
-            double mid = 0.5 * (lo + hi);
-            if (Psychrometrics.saturatedEnthalpy(mid, p) < h) {
-                lo = mid;
+            double f = hs - h;
+            if (f < 0) {
+                lo = t;
             } else {
-                hi = mid;
+                hi = t;
             }
-            if (hi - lo < 1e-9) {
-                return 0.5 * (lo + hi);
+            double next = t - f / slope;
+            if (!(next > lo && next < hi)) {
+                next = 0.5 * (lo + hi);
             }
+            if (Math.abs(next - t) < 1e-9 || hi - lo < 1e-9) {
+                return next;
+            }
+            t = next;
+            hs = Psychrometrics.saturatedEnthalpy(t, p);
+            slope = Psychrometrics.saturatedEnthalpySlope(t, p);
         }
         throw new ConvergenceException("saturated-air temperature", 200, hi - lo);
     }
