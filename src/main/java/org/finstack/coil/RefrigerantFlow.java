@@ -110,12 +110,8 @@ public record RefrigerantFlow(Fluid fluid, Duty duty, double diameter, double ov
         if (override > 0) {
             return override;
         }
-        double p = local.state().pressure();
         if (local.twoPhase()) {
-            SaturatedProperties sp = saturated(p);
-            TubeFlow f = new TubeFlow(diameter, massFlux, clampQuality(local.quality()), Math.max(heatFlux, 100));
-            return duty == Duty.EVAPORATOR ? Dryout.apply(BOILING, sp, f, w)
-                    : CONDENSING.heatTransferCoefficient(sp, f, CONDENSING_WALL_DT, w);
+            return twoPhaseCoefficient(saturated(local.state().pressure()), local.quality(), massFlux, heatFlux, w);
         }
         FluidState s = local.state();
         TransportProperties t = fluid.transport();
@@ -127,6 +123,27 @@ public record RefrigerantFlow(Fluid fluid, Duty duty, double diameter, double ov
     }
 
     /**
+     * Two-phase film coefficient from saturated properties already at hand (the user's override
+     * if there is one).
+     *
+     * @param sp       saturated properties at the local pressure
+     * @param quality  vapour quality [-] (kept within 0.001..0.999)
+     * @param massFlux [kg/(m2 s)]
+     * @param heatFlux heat flux at the inner wall, magnitude [W/m2]
+     * @param w        warnings
+     * @return [W/(m2 K)]
+     */
+    public double twoPhaseCoefficient(SaturatedProperties sp, double quality, double massFlux, double heatFlux,
+            Warnings w) {
+        if (override > 0) {
+            return override;
+        }
+        TubeFlow f = new TubeFlow(diameter, massFlux, clampQuality(quality), Math.max(heatFlux, 100));
+        return duty == Duty.EVAPORATOR ? Dryout.apply(BOILING, sp, f, w)
+                : CONDENSING.heatTransferCoefficient(sp, f, CONDENSING_WALL_DT, w);
+    }
+
+    /**
      * Frictional pressure gradient at a local state.
      *
      * @param local    the local state
@@ -135,15 +152,27 @@ public record RefrigerantFlow(Fluid fluid, Duty duty, double diameter, double ov
      * @return [Pa/m], positive
      */
     public double frictionGradient(Local local, double massFlux, Warnings w) {
-        double p = local.state().pressure();
         if (local.twoPhase()) {
-            return FRICTION.gradient(saturated(p), TubeFlow.adiabatic(diameter, massFlux, clampQuality(local.quality())), w);
+            return twoPhaseFrictionGradient(saturated(local.state().pressure()), local.quality(), massFlux, w);
         }
         FluidState s = local.state();
         double mu = fluid.transport().viscosity(s);
         double re = massFlux * diameter / mu;
         double darcy = Churchill1977.darcy(re, 0, w);
         return darcy / diameter * massFlux * massFlux / (2 * s.density());
+    }
+
+    /**
+     * Two-phase frictional pressure gradient from saturated properties already at hand.
+     *
+     * @param sp       saturated properties at the local pressure
+     * @param quality  vapour quality [-] (kept within 0.001..0.999)
+     * @param massFlux [kg/(m2 s)]
+     * @param w        warnings
+     * @return [Pa/m], positive
+     */
+    public double twoPhaseFrictionGradient(SaturatedProperties sp, double quality, double massFlux, Warnings w) {
+        return FRICTION.gradient(sp, TubeFlow.adiabatic(diameter, massFlux, clampQuality(quality)), w);
     }
 
     /**
@@ -157,8 +186,23 @@ public record RefrigerantFlow(Fluid fluid, Duty duty, double diameter, double ov
      * @return inlet minus outlet pressure [Pa] (positive when the flow speeds up)
      */
     public double accelerationDrop(double pressure, double massFlux, double qualityIn, double qualityOut, Warnings w) {
-        return AccelerationPressureChange.between(VOID, saturated(pressure), diameter, massFlux,
-                clampQuality(qualityIn), clampQuality(qualityOut), w);
+        return accelerationDrop(saturated(pressure), massFlux, qualityIn, qualityOut, w);
+    }
+
+    /**
+     * Pressure change by acceleration from saturated properties already at hand.
+     *
+     * @param sp         saturated properties at the local pressure
+     * @param massFlux   [kg/(m2 s)]
+     * @param qualityIn  [-]
+     * @param qualityOut [-]
+     * @param w          warnings
+     * @return inlet minus outlet pressure [Pa] (positive when the flow speeds up)
+     */
+    public double accelerationDrop(SaturatedProperties sp, double massFlux, double qualityIn, double qualityOut,
+            Warnings w) {
+        return AccelerationPressureChange.between(VOID, sp, diameter, massFlux, clampQuality(qualityIn),
+                clampQuality(qualityOut), w);
     }
 
     /**
@@ -174,8 +218,20 @@ public record RefrigerantFlow(Fluid fluid, Duty duty, double diameter, double ov
         if (!local.twoPhase()) {
             return local.state().density();
         }
-        SaturatedProperties sp = saturated(local.state().pressure());
-        double alpha = VOID.voidFraction(sp, TubeFlow.adiabatic(diameter, massFlux, clampQuality(local.quality())), w);
+        return twoPhaseChargeDensity(saturated(local.state().pressure()), local.quality(), massFlux, w);
+    }
+
+    /**
+     * Two-phase mean density for the charge from saturated properties already at hand.
+     *
+     * @param sp       saturated properties at the local pressure
+     * @param quality  vapour quality [-] (kept within 0.001..0.999)
+     * @param massFlux [kg/(m2 s)]
+     * @param w        warnings
+     * @return [kg/m3]
+     */
+    public double twoPhaseChargeDensity(SaturatedProperties sp, double quality, double massFlux, Warnings w) {
+        double alpha = VOID.voidFraction(sp, TubeFlow.adiabatic(diameter, massFlux, clampQuality(quality)), w);
         return alpha * sp.vapourDensity() + (1 - alpha) * sp.liquidDensity();
     }
 

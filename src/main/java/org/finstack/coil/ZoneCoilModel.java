@@ -16,6 +16,7 @@ import org.finstack.fluid.InputPair;
 import org.finstack.fluid.SaturationState;
 import org.finstack.fluid.psychro.MoistAirState;
 import org.finstack.fluid.psychro.Psychrometrics;
+import org.finstack.tubeside.SaturatedProperties;
 
 /**
  * The zone model: an evaporator is a two-phase zone followed by a superheat zone, a condenser a
@@ -39,6 +40,13 @@ public final class ZoneCoilModel {
     private static final int MAX_OUTER = 40;
     private static final int MAX_EVALUATIONS = 200;
     private static final int QUALITY_POINTS = 8;
+    private static final int MAX_DUTY_UPDATES = 16;
+
+    /**
+     * Outlet-enthalpy miss at which the outlet condition is met [J/kg] (about 0.005 K of vapour; the
+     * pressure-drop iteration's tolerance alone moves the outlet by a few J/kg).
+     */
+    static final double OUTLET_ACCURACY = 5;
 
     /**
      * Rates a case.
@@ -59,6 +67,10 @@ public final class ZoneCoilModel {
         private AirFlow.Side side;
         private CoilSurface surface;
         private final Warnings warnings = new Warnings();
+        /** Refrigerant pressure drop of the last flow rated, the next one's start [Pa]. */
+        private double lastDrop;
+        /** Mass flow of the last outlet-condition solve, the next one's start [kg/s]. */
+        private double lastMassFlow;
 
         Run(CoilSetup s) {
             this.s = s;
@@ -110,6 +122,11 @@ public final class ZoneCoilModel {
         /** Solve the mass flow that gives the outlet superheat (evaporator) or subcooling (condenser). */
         private Outcome atOutletCondition(double kelvin, double reference) {
             boolean evaporator = c.refrigerant().duty() == Duty.EVAPORATOR;
+            Outcome quick = byDutyUpdate(kelvin, reference, evaporator);
+            if (quick != null) {
+                lastMassFlow = quick.massFlow;
+                return quick;
+            }
             DoubleUnaryOperator miss = m -> {
                 Outcome o = evaluate(m, reference);
                 double target = outletTargetEnthalpy(o.outletPressure, kelvin, evaporator);
@@ -143,7 +160,50 @@ public final class ZoneCoilModel {
                 }
             }
             double m = solve(miss, lo, hi, "refrigerant mass flow", 1e-10);
+            lastMassFlow = m;
             return evaluate(m, reference);
+        }
+
+        /**
+         * The outlet condition by the duty update m = Q(m) / (h_target - h_in), which converges
+         * because the duty changes much less than the flow, with secant steps on the outlet miss
+         * once two flows have been rated; starts from the last solve's flow.
+         *
+         * @return the outcome within {@value #OUTLET_ACCURACY} J/kg of the target outlet
+         *         enthalpy, or {@code null} if the update does not settle (the bracketed search
+         *         then takes over)
+         */
+        private Outcome byDutyUpdate(double kelvin, double reference, boolean evaporator) {
+            double m = lastMassFlow > 0 ? lastMassFlow : Math.max(1e-5, estimatedMassFlow(reference));
+            double lastM = Double.NaN;
+            double lastF = Double.NaN;
+            for (int k = 0; k < MAX_DUTY_UPDATES; k++) {
+                Outcome o;
+                try {
+                    o = evaluate(m, reference);
+                } catch (InputException | ConvergenceException e) {
+                    return null;
+                }
+                double target = outletTargetEnthalpy(o.outletPressure, kelvin, evaporator);
+                double f = evaporator ? o.outletEnthalpy - target : target - o.outletEnthalpy;
+                if (Math.abs(f) <= OUTLET_ACCURACY) {
+                    return o;
+                }
+                double next = o.duty / (target - o.inletEnthalpy);
+                if (!Double.isNaN(lastF) && f != lastF) {
+                    double secant = m - f * (m - lastM) / (f - lastF);
+                    if (secant > 0.5 * m && secant < 2 * m) {
+                        next = secant;
+                    }
+                }
+                if (!(next > 0)) {
+                    return null;
+                }
+                lastM = m;
+                lastF = f;
+                m = Math.max(0.5 * m, Math.min(2 * m, next));
+            }
+            return null;
         }
 
         private double outletTargetEnthalpy(double pOut, double kelvin, boolean evaporator) {
@@ -153,6 +213,15 @@ public final class ZoneCoilModel {
             }
             double t = evaporator ? sat.dewTemperature() + kelvin : sat.bubbleTemperature() - kelvin;
             return s.fluid().at(InputPair.TP, t, evaporator ? pOut * (1 - 1e-9) : pOut * (1 + 1e-9)).enthalpy();
+        }
+
+        /** Mean air temperature of a coil that is two-phase throughout at the reference pressure [K]. */
+        private double estimatedMeanAirTemperature() {
+            SaturationState sat = s.fluid().saturationAtPressure(s.referencePressure());
+            double t = 0.5 * (sat.bubbleTemperature() + sat.dewTemperature());
+            SegmentExchange.Result x = SegmentExchange.exchange(surface, 1, air.inlet(), air.massFlow(), t,
+                    Double.POSITIVE_INFINITY, 2000, Warnings.discard());
+            return 0.5 * (air.inlet().dryBulb() + x.airOut().dryBulb());
         }
 
         /** The flow that a fully two-phase coil would carry: duty of an isothermal coil over the latent heat. */
@@ -208,18 +277,35 @@ public final class ZoneCoilModel {
                     r.liquidTemperature(), r.inletTemperature(), r.target(), r.model(), r.segments());
         }
 
-        /** Rates at a given refrigerant mass flow; iterates the pressure drop. */
+        /**
+         * Rates at a given refrigerant mass flow; iterates the pressure drop, starting from the
+         * last flow's drop, by secant steps on drop(dp) - dp (damped substitution where a secant
+         * step would leave the plausible range).
+         */
         private Outcome evaluate(double massFlow, double reference) {
-            double dp = 0;
+            double dp = lastDrop;
+            double lastDp = Double.NaN;
+            double lastMiss = Double.NaN;
             Outcome o = null;
             for (int i = 0; i < MAX_OUTER; i++) {
                 o = c.refrigerant().duty() == Duty.EVAPORATOR ? evaporator(massFlow, reference + dp, reference)
                         : condenser(massFlow, reference, Math.max(reference - dp, 0.3 * reference));
                 double next = o.pressureDrop;
-                if (Math.abs(next - dp) <= 1 + 1e-4 * next) {
+                double miss = next - dp;
+                if (Math.abs(miss) <= 1 + 1e-4 * next) {
+                    lastDrop = next;
                     return o;
                 }
-                dp = i < 3 ? next : 0.25 * dp + 0.75 * next; // damped after the first steps
+                double step = i < 3 ? next : 0.25 * dp + 0.75 * next; // damped after the first steps
+                if (!Double.isNaN(lastMiss) && miss != lastMiss) {
+                    double secant = dp - miss * (dp - lastDp) / (miss - lastMiss);
+                    if (secant >= 0 && secant <= 2 * Math.max(dp, next)) {
+                        step = secant;
+                    }
+                }
+                lastDp = dp;
+                lastMiss = miss;
+                dp = step;
             }
             throw new ConvergenceException("refrigerant pressure drop", MAX_OUTER, Math.abs(o.pressureDrop - dp));
         }
@@ -314,12 +400,11 @@ public final class ZoneCoilModel {
             double xa = Math.max(0, Math.min(1, a.quality()));
             double xb = Math.max(0, Math.min(1, b.quality()));
             double p = 0.5 * (a.state().pressure() + b.state().pressure());
-            SaturationState sat = s.fluid().saturationAtPressure(p);
+            SaturatedProperties sp = s.flow().saturated(p);
             double sum = 0;
             for (int i = 0; i < QUALITY_POINTS; i++) {
                 double x = xa + (xb - xa) * (i + 0.5) / QUALITY_POINTS;
-                double h = sat.liquid().enthalpy() + x * sat.latentHeat();
-                sum += s.flow().insideCoefficient(s.flow().at(p, h), g, flux, Warnings.discard());
+                sum += s.flow().twoPhaseCoefficient(sp, x, g, flux, Warnings.discard());
             }
             return sum / QUALITY_POINTS;
         }
@@ -356,31 +441,25 @@ public final class ZoneCoilModel {
             return new Zone(name, f, x, hi, start.enthalpy(), hOut, in, s.flow().at(start.pressure(), hOut));
         }
 
-        /** Pressure drop, charge and mixed leaving air of a set of zones. */
+        /** Pressure drop and mixed leaving air of a set of zones. */
         private Outcome outcome(double m, double pIn, double pOut, double hIn, double hOut, List<Zone> zones) {
             double g = m / s.circuits() / s.tubeFlowArea();
             double length = s.circuitLength();
             double bends = s.bendsPerCircuit();
             double dp = 0;
-            double charge = 0;
-            double volume = s.derived().internalVolume();
             Warnings w = Warnings.discard();
             for (Zone z : zones) {
                 double p = 0.5 * (z.in.state().pressure() + z.out.state().pressure());
+                ZonePoints points = new ZonePoints(z, p);
                 double grad = 0;
-                double rho = 0;
                 for (int i = 0; i < QUALITY_POINTS; i++) {
-                    double h = z.hIn + (z.hOut - z.hIn) * (i + 0.5) / QUALITY_POINTS;
-                    RefrigerantFlow.Local l = s.flow().at(p, h);
-                    grad += s.flow().frictionGradient(l, g, w) / QUALITY_POINTS;
-                    rho += s.flow().chargeDensity(l, g, w) / QUALITY_POINTS;
+                    grad += points.frictionGradient(i, g, w) / QUALITY_POINTS;
                 }
                 double zoneLength = z.fraction * length;
                 dp += grad * zoneLength * (1 + bends * BEND_EQUIVALENT_DIAMETERS * s.flow().diameter() / length);
                 if (z.in.twoPhase() || z.out.twoPhase()) {
-                    dp += s.flow().accelerationDrop(p, g, z.in.quality(), z.out.quality(), w);
+                    dp += s.flow().accelerationDrop(points.props(), g, z.in.quality(), z.out.quality(), w);
                 }
-                charge += rho * z.fraction * volume;
             }
             double mAir = air.massFlow();
             double hAir = 0;
@@ -397,8 +476,71 @@ public final class ZoneCoilModel {
             double tAir = Psychrometrics.dryBulbFromEnthalpy(hAir, wAir);
             MoistAirState out = new MoistAirState(tAir, Math.min(wAir,
                     Psychrometrics.saturationHumidityRatio(tAir, air.inlet().pressure())), air.inlet().pressure());
-            return new Outcome(m, pIn, pOut, hIn, hOut, zones, Math.max(0, dp), charge, duty, out,
+            return new Outcome(m, pIn, pOut, hIn, hOut, zones, Math.max(0, dp), duty, out,
                     mAir * (air.inlet().humidityRatio() - out.humidityRatio()));
+        }
+
+        /** Refrigerant in the coil: each zone's share of the internal volume at its mean density over its points. */
+        private double charge(Outcome o) {
+            double g = o.massFlow / s.circuits() / s.tubeFlowArea();
+            double charge = 0;
+            Warnings w = Warnings.discard();
+            for (Zone z : o.zones) {
+                ZonePoints points = new ZonePoints(z, 0.5 * (z.in.state().pressure() + z.out.state().pressure()));
+                double rho = 0;
+                for (int i = 0; i < QUALITY_POINTS; i++) {
+                    rho += points.chargeDensity(i, g, w) / QUALITY_POINTS;
+                }
+                charge += rho * z.fraction * s.derived().internalVolume();
+            }
+            return charge;
+        }
+
+        /**
+         * The points a zone is averaged over, at the zone's mean pressure and enthalpies spaced
+         * evenly from its inlet to its outlet: inside the dome from one set of saturated
+         * properties, outside it from the fluid's state at (p, h).
+         */
+        private final class ZonePoints {
+            private final Zone z;
+            private final double pressure;
+            private final SaturationState sat;
+            private SaturatedProperties props;
+
+            ZonePoints(Zone z, double pressure) {
+                this.z = z;
+                this.pressure = pressure;
+                this.sat = s.fluid().saturationAtPressure(pressure);
+            }
+
+            SaturatedProperties props() {
+                if (props == null) {
+                    props = s.flow().saturated(pressure);
+                }
+                return props;
+            }
+
+            private double enthalpy(int i) {
+                return z.hIn + (z.hOut - z.hIn) * (i + 0.5) / QUALITY_POINTS;
+            }
+
+            /** @return the quality of point i inside the dome, or NaN outside it */
+            private double quality(int i) {
+                double x = (enthalpy(i) - sat.liquid().enthalpy()) / sat.latentHeat();
+                return x > 0 && x < 1 ? x : Double.NaN;
+            }
+
+            double frictionGradient(int i, double g, Warnings w) {
+                double x = quality(i);
+                return Double.isNaN(x) ? s.flow().frictionGradient(s.flow().at(pressure, enthalpy(i)), g, w)
+                        : s.flow().twoPhaseFrictionGradient(props(), x, g, w);
+            }
+
+            double chargeDensity(int i, double g, Warnings w) {
+                double x = quality(i);
+                return Double.isNaN(x) ? s.flow().chargeDensity(s.flow().at(pressure, enthalpy(i)), g, w)
+                        : s.flow().twoPhaseChargeDensity(props(), x, g, w);
+            }
         }
 
         private Rating assemble(Outcome o) {
@@ -430,7 +572,7 @@ public final class ZoneCoilModel {
             }
             Rating.RefrigerantResult ref = new Rating.RefrigerantResult(s.fluid().name(), o.massFlow, o.inletPressure,
                     pOut, in.temperature(), out.temperature(), o.inletEnthalpy, o.outletEnthalpy,
-                    out.twoPhase() ? out.quality() : -1, superheat, subcool, dtSat, o.charge, balance,
+                    out.twoPhase() ? out.quality() : -1, superheat, subcool, dtSat, charge(o), balance,
                     circuits, satIn.dewTemperature(), satOut.dewTemperature());
             List<Rating.ZoneResult> zones = o.zones.stream().map(z -> new Rating.ZoneResult(z.name, z.fraction,
                     Math.abs(z.x.heat()), z.insideCoefficient, z.x.wet())).toList();
@@ -499,7 +641,7 @@ public final class ZoneCoilModel {
     }
 
     private record Outcome(double massFlow, double inletPressure, double outletPressure, double inletEnthalpy,
-            double outletEnthalpy, List<Zone> zones, double pressureDrop, double charge, double duty,
+            double outletEnthalpy, List<Zone> zones, double pressureDrop, double duty,
             MoistAirState airOut, double condensate) {
 
         double outletTemperatureForEps() {
