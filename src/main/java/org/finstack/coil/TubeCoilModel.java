@@ -68,10 +68,13 @@ import org.finstack.fluid.psychro.Psychrometrics;
  * (the largest of these changes over its tolerance).
  *
  * <p><b>Targets</b> as the zone model: a mass flow is rated as it is; a superheat or subcooling
- * is that of the circuits' outlets mixed by enthalpy at the header pressure, met by a bracketed
- * root search on the total mass flow (Illinois regula falsi, to {@value #ENTHALPY_ACCURACY} J/kg
- * of outlet enthalpy); while the search is far from the root the passes run with looser
- * tolerances, and the flow returned is always rated with the tolerances above. A required
+ * is that of the circuits' outlets mixed by enthalpy at the header pressure, met to
+ * {@value #ENTHALPY_ACCURACY} J/kg of outlet enthalpy. The flow is first updated inside the
+ * passes themselves (a relaxed duty update after every pass, see {@code coupled}); where that
+ * does not settle within {@value #COUPLED_PASSES} passes a bracketed root search on the total
+ * mass flow takes over (Illinois regula falsi), each trial flow rated by its own passes, with
+ * looser tolerances while the search is far from the root; the flow returned is always rated
+ * with the tolerances above. A required
  * capacity is met by the same search on the saturation temperature, walking from the given
  * saturation temperature in {@value #CAPACITY_STEP_K} K steps to the nearest sign change (at very
  * low pressure the pressure drop makes the capacity fall again), with the outlet condition held.
@@ -116,8 +119,8 @@ public final class TubeCoilModel {
 
     private static final int MAX_EVALUATIONS = 200;
 
-    /** Mixed-outlet enthalpy miss small enough for the outlet condition [J/kg] (about 0.005 K of vapour). */
-    static final double ENTHALPY_ACCURACY = 5;
+    /** Mixed-outlet enthalpy miss small enough for the outlet condition [J/kg] (about 0.02 K of vapour). */
+    static final double ENTHALPY_ACCURACY = 20;
 
     /** Outlet miss [J/kg] per unit of looseness, and the largest looseness, of the flows tried while solving. */
     private static final double LOOSE_MISS = 100;
@@ -130,6 +133,15 @@ public final class TubeCoilModel {
     /** Step of the saturation-temperature search for a required capacity [K]. */
     static final double CAPACITY_STEP_K = 3;
     private static final int MAX_AIR_MEAN_LOOPS = 6;
+
+    /** Most passes of the coupled solve of the flow with the passes, before the bracketed search takes over. */
+    static final int COUPLED_PASSES = 40;
+
+    /**
+     * Share of the duty update's step taken per pass: the air and the circuits' pressures answer a
+     * change of flow over several passes, and the full step swings.
+     */
+    private static final double RELAX = 0.3;
     private static final double AIR_MEAN_TOLERANCE_K = 0.1;
     private static final double SPLIT_TOLERANCE = 0.002;
     private static final double CP_AIR = 1006; // ASHRAE Handbook - Fundamentals 2017 Ch. 1, dry-air term of moist-air enthalpy
@@ -247,6 +259,8 @@ public final class TubeCoilModel {
         private CoilSurface[] surfaces;
         private CoilSurface meanSurface;
         private AirFlow.Side side;
+        /** Mean air temperature the air-side properties are taken at [K]. */
+        private double airMean;
 
         /** air[r][j][k]: air entering row r at place j, segment column k; air[rows] leaves the coil. */
         private final MoistAirState[][][] airState;
@@ -311,6 +325,7 @@ public final class TubeCoilModel {
         }
 
         private void setAirMean(double t) {
+            airMean = t;
             side = air.at(t, Warnings.discard());
             meanSurface = CoilSurface.of(c.coil(), c.fouling(), side.coefficient(), SchmidtFinEfficiency.INSTANCE);
             surfaces = new CoilSurface[places];
@@ -333,7 +348,7 @@ public final class TubeCoilModel {
             for (int i = 0; i < MAX_AIR_MEAN_LOOPS; i++) {
                 o = solveTarget();
                 double next = 0.5 * (air.inlet().dryBulb() + o.airOut.dryBulb());
-                if (Math.abs(next - mean) < AIR_MEAN_TOLERANCE_K) {
+                if (Math.abs(next - airMean) < AIR_MEAN_TOLERANCE_K) {
                     break;
                 }
                 mean = next;
@@ -387,6 +402,11 @@ public final class TubeCoilModel {
             double guess = lastMassFlow > 0 ? lastMassFlow * estimate / lastEstimate : estimate;
             double step = warm ? 1.005 : 1.3;
             lastEstimate = estimate;
+            Outcome coupled = coupled(kelvin, guess);
+            if (coupled != null) {
+                lastMassFlow = coupled.massFlow;
+                return coupled;
+            }
             double a = guess;
             double fa = miss.applyAsDouble(a);
             if (Math.abs(fa) <= ENTHALPY_ACCURACY) {
@@ -415,6 +435,52 @@ public final class TubeCoilModel {
             double m = illinois(miss, a, fa, b, fb, 1e-7, ENTHALPY_ACCURACY, "refrigerant mass flow");
             lastMassFlow = m;
             return evaluate(m);
+        }
+
+        /**
+         * The outlet condition met in the passes themselves: after every pass the flow moves a
+         * share {@value #RELAX} of the way to the refrigerant-side duty over the enthalpy rise the
+         * target asks for, m = Q / (h_target - h_in) (a fixed point that converges because the
+         * duty changes much less than the flow), and the air-side properties follow the mean air
+         * temperature; the passes end when every pass tolerance and the outlet condition are met.
+         *
+         * @return the converged outcome, or {@code null} when this does not settle within
+         *         {@value #COUPLED_PASSES} passes (the bracketed search then takes over)
+         */
+        private Outcome coupled(double kelvin, double guess) {
+            double hIn = inletEnthalpy();
+            primeOnce();
+            double m = guess;
+            double[] lastOutlet = null;
+            for (int pass = 0; pass < COUPLED_PASSES; pass++) {
+                Pass p;
+                try {
+                    p = pass(m, hIn);
+                } catch (InputException e) {
+                    if (e.field().equals(TOO_MUCH_FLOW)) {
+                        return null;
+                    }
+                    throw e;
+                }
+                double residual = residual(p, rebalance(p, pass), lastOutlet);
+                lastOutlet = p.outletEnthalpy.clone();
+                Outcome o = outcome(m, hIn, p);
+                double target = outletTargetEnthalpy(o.outletPressure, kelvin);
+                double f = evaporator ? o.outletEnthalpy - target : target - o.outletEnthalpy;
+                if (residual <= 1 && Math.abs(f) <= ENTHALPY_ACCURACY) {
+                    return o;
+                }
+                double mean = 0.5 * (air.inlet().dryBulb() + o.airOut.dryBulb());
+                if (Math.abs(mean - airMean) > 0.5 * AIR_MEAN_TOLERANCE_K) {
+                    setAirMean(mean);
+                }
+                double next = m + RELAX * (o.duty / (target - hIn) - m);
+                if (!(next > 0)) {
+                    return null;
+                }
+                m = Math.max(0.7 * m, Math.min(1.4 * m, next));
+            }
+            return null;
         }
 
         private double outletTargetEnthalpy(double pOut, double kelvin) {
@@ -524,38 +590,52 @@ public final class TubeCoilModel {
          */
         private Outcome evaluate(double massFlow) {
             double hIn = inletEnthalpy();
-            if (!primed) {
-                march.primeFlux(Math.abs(estimatedMassFlow() * s.fluid().saturationAtPressure(reference).latentHeat())
-                        / s.derived().insideArea());
-                primed = true;
-            }
+            primeOnce();
             double residual = Double.POSITIVE_INFINITY;
             double[] lastOutlet = null;
             for (int pass = 0; pass < MAX_PASSES; pass++) {
                 Pass p = pass(massFlow, hIn);
-                double splitResidual = rebalance(p, pass);
-                double outletChange = Double.POSITIVE_INFINITY;
-                if (lastOutlet != null) {
-                    outletChange = 0;
-                    for (int i = 0; i < lastOutlet.length; i++) {
-                        outletChange = Math.max(outletChange, Math.abs(p.outletEnthalpy[i] - lastOutlet[i]));
-                    }
-                }
+                residual = residual(p, rebalance(p, pass), lastOutlet) / looseness;
                 lastOutlet = p.outletEnthalpy.clone();
-                double refrigerantDuty = 0;
-                for (double d : p.duty) {
-                    refrigerantDuty += d;
-                }
-                double balance = Math.abs(faceAirDuty() - refrigerantDuty) / Math.max(Math.abs(refrigerantDuty), 1e-9);
-                residual = Math.max(Math.max(p.airChange / AIR_TOLERANCE_K, p.pressureChange),
-                        Math.max(splitResidual / SPLIT_TOLERANCE, Math.max(outletChange / OUTLET_TOLERANCE,
-                                balance / BALANCE_TOLERANCE))) / looseness;
                 if (residual <= 1) {
                     return outcome(massFlow, hIn, p);
                 }
             }
             throw new ConvergenceException("tube-by-tube passes (air, circuit pressures and flow split)", MAX_PASSES,
                     residual);
+        }
+
+        /** Sets the film-coefficient iteration's starting flux from the first estimate of the duty. */
+        private void primeOnce() {
+            if (!primed) {
+                march.primeFlux(Math.abs(estimatedMassFlow() * s.fluid().saturationAtPressure(reference).latentHeat())
+                        / s.derived().insideArea());
+                primed = true;
+            }
+        }
+
+        /**
+         * @param p             the pass
+         * @param split         the flow split's deviation after it
+         * @param lastOutlet    the circuits' outlet enthalpies of the pass before, or null
+         * @return the largest of the passes' changes over its tolerance (at most 1 when settled)
+         */
+        private double residual(Pass p, double split, double[] lastOutlet) {
+            double outletChange = Double.POSITIVE_INFINITY;
+            if (lastOutlet != null) {
+                outletChange = 0;
+                for (int i = 0; i < lastOutlet.length; i++) {
+                    outletChange = Math.max(outletChange, Math.abs(p.outletEnthalpy[i] - lastOutlet[i]));
+                }
+            }
+            double refrigerantDuty = 0;
+            for (double d : p.duty) {
+                refrigerantDuty += d;
+            }
+            double balance = Math.abs(faceAirDuty() - refrigerantDuty) / Math.max(Math.abs(refrigerantDuty), 1e-9);
+            return Math.max(Math.max(p.airChange / AIR_TOLERANCE_K, p.pressureChange),
+                    Math.max(split / SPLIT_TOLERANCE, Math.max(outletChange / OUTLET_TOLERANCE,
+                            balance / BALANCE_TOLERANCE)));
         }
 
         /**
@@ -621,6 +701,7 @@ public final class TubeCoilModel {
                 double m = massFlow * share[ci];
                 double g = m / s.tubeFlowArea();
                 double pIn = evaporator ? reference + drop[ci] : reference;
+                march.startCircuit();
                 double p = pIn;
                 double h = hIn;
                 double duty = 0;
@@ -733,7 +814,7 @@ public final class TubeCoilModel {
             double tAir = Psychrometrics.dryBulbFromEnthalpy(hAir, wAir);
             double wSat = Psychrometrics.saturationHumidityRatio(tAir, pa);
             if (wAir > wSat) {
-                tAir = SegmentExchange.temperatureOfSaturatedEnthalpy(hAir, pa, tAir - 30, tAir + 30);
+                tAir = SegmentExchange.temperatureOfSaturatedEnthalpy(hAir, pa, tAir - 30, tAir + 30, tAir);
                 wAir = Psychrometrics.saturationHumidityRatio(tAir, pa);
             }
             MoistAirState out = new MoistAirState(tAir, wAir, pa);

@@ -11,18 +11,7 @@ import org.finstack.fluid.SaturationState;
 import org.finstack.fluid.TransportProperties;
 import org.finstack.fluid.psychro.MoistAirState;
 import org.finstack.fluid.psychro.Psychrometrics;
-import org.finstack.tubeside.AccelerationPressureChange;
-import org.finstack.tubeside.BoilingCorrelation;
-import org.finstack.tubeside.BoilingCorrelations;
-import org.finstack.tubeside.CondensationCorrelation;
-import org.finstack.tubeside.CondensationCorrelations;
-import org.finstack.tubeside.Dryout;
 import org.finstack.tubeside.SaturatedProperties;
-import org.finstack.tubeside.TubeFlow;
-import org.finstack.tubeside.TwoPhaseFriction;
-import org.finstack.tubeside.TwoPhaseFrictions;
-import org.finstack.tubeside.VoidFraction;
-import org.finstack.tubeside.VoidFractions;
 
 /**
  * The refrigerant's step through one tube segment for {@link TubeCoilModel}: the local state at
@@ -38,13 +27,8 @@ import org.finstack.tubeside.VoidFractions;
  */
 final class TubeCoilModelMarch {
 
-    private static final BoilingCorrelation BOILING = BoilingCorrelations.standard();
-    private static final CondensationCorrelation CONDENSING = CondensationCorrelations.standard();
-    private static final TwoPhaseFriction FRICTION = TwoPhaseFrictions.standard();
-    private static final VoidFraction VOID = VoidFractions.standard();
-
-    /** Wall-to-saturation temperature difference for the condensation correlation [K], as in {@link RefrigerantFlow}. */
-    private static final double CONDENSING_WALL_DT = 5; // common practice for air-cooled condensers
+    /** ln(1 + step) of the saturation grid. */
+    private static final double LN_GRID_STEP = Math.log1p(TubeCoilModel.SATURATION_GRID_STEP);
 
     /** Largest number of parts a segment is split into at phase boundaries (liquid, two-phase, vapour). */
     private static final int MAX_PARTS = 3;
@@ -70,6 +54,8 @@ final class TubeCoilModelMarch {
     private final double gridOrigin;
     /** Heat flux every segment's film-coefficient iteration starts from [W/m2]. */
     private double startFlux = 5000;
+    /** Heat flux the next two-phase segment of the circuit being marched starts from [W/m2]. */
+    private double circuitFlux = 5000;
     private final boolean[] frost;
     /** Per segment, the last single-phase state the fluid computed at its inlet. */
     private final FluidState[] lastState;
@@ -111,6 +97,16 @@ final class TubeCoilModelMarch {
      */
     void primeFlux(double heatFlux) {
         startFlux = Math.max(100, heatFlux);
+        circuitFlux = startFlux;
+    }
+
+    /**
+     * Starts a circuit's march: its first two-phase segment's film-coefficient iteration starts
+     * from the primed flux, every later one from the flux its predecessor in the circuit settled
+     * at (so a segment's result depends only on what the march brings to it in this pass).
+     */
+    void startCircuit() {
+        circuitFlux = startFlux;
     }
 
     /** @return whether water froze on any segment in the last pass */
@@ -168,7 +164,7 @@ final class TubeCoilModelMarch {
 
         Saturation(double pressure) {
             this.pressure = pressure;
-            double u = Math.log(pressure / gridOrigin) / Math.log1p(TubeCoilModel.SATURATION_GRID_STEP);
+            double u = Math.log(pressure / gridOrigin) / LN_GRID_STEP;
             int i = (int) Math.floor(u);
             double t = u - i;
             Node a = node(i);
@@ -313,13 +309,8 @@ final class TubeCoilModelMarch {
     }
 
     private double insideCoefficient(Point p, double quality, double g, double q, Warnings w) {
-        if (flow.override() > 0) {
-            return flow.override();
-        }
         if (p.region == Region.TWO_PHASE) {
-            TubeFlow f = new TubeFlow(flow.diameter(), g, clamp(quality), Math.max(q, 100));
-            return evaporator ? Dryout.apply(BOILING, p.sat.props(), f, w)
-                    : CONDENSING.heatTransferCoefficient(p.sat.props(), f, CONDENSING_WALL_DT, w);
+            return flow.twoPhaseCoefficient(p.sat.props(), quality, g, q, w);
         }
         return flow.insideCoefficient(new RefrigerantFlow.Local(p.state, false, p.quality), g, q, w);
     }
@@ -327,7 +318,7 @@ final class TubeCoilModelMarch {
     /** Friction gradient [Pa/m] at a state; two-phase at the given quality. */
     private double frictionGradient(Point p, double quality, double g, Warnings w) {
         if (p.region == Region.TWO_PHASE) {
-            return FRICTION.gradient(p.sat.props(), TubeFlow.adiabatic(flow.diameter(), g, clamp(quality)), w);
+            return flow.twoPhaseFrictionGradient(p.sat.props(), quality, g, w);
         }
         return flow.frictionGradient(new RefrigerantFlow.Local(p.state, false, p.quality), g, w);
     }
@@ -336,9 +327,7 @@ final class TubeCoilModelMarch {
         if (p.region != Region.TWO_PHASE) {
             return p.state.density();
         }
-        SaturatedProperties sp = p.sat.props();
-        double alpha = VOID.voidFraction(sp, TubeFlow.adiabatic(flow.diameter(), g, clamp(quality)), w);
-        return alpha * sp.vapourDensity() + (1 - alpha) * sp.liquidDensity();
+        return flow.twoPhaseChargeDensity(p.sat.props(), quality, g, w);
     }
 
     /**
@@ -402,7 +391,7 @@ final class TubeCoilModelMarch {
         for (int part = 0; part < MAX_PARTS && remaining > 1e-12; part++) {
             double cap = capacity(cur, massFlow);
             double share = remaining;
-            double hi = insideCoefficient(cur, cur.quality(), massFlux, startFlux, w);
+            double hi = insideCoefficient(cur, cur.quality(), massFlux, fluxDependent(cur) ? circuitFlux : startFlux, w);
             SegmentExchange.Result x = SegmentExchange.exchange(surface, fraction * share, airIn, airMassFlow * share,
                     cur.temperature(), cap, hi, w);
             for (int i = 0; i < FLUX_ITERATIONS && fluxDependent(cur); i++) {
@@ -411,6 +400,7 @@ final class TubeCoilModelMarch {
                 double q = Math.abs(x.heat()) / (insideArea * share);
                 double xMid = Math.min(1, Math.max(0, cur.quality() + 0.5 * x.heat() / (massFlow * s.latentHeat())));
                 double next = insideCoefficient(cur, xMid, massFlux, q, w);
+                circuitFlux = Math.max(100, q);
                 if (Math.abs(next - hi) <= FLUX_TOLERANCE * hi) {
                     break;
                 }
@@ -446,8 +436,7 @@ final class TubeCoilModelMarch {
             frosted |= x.frost();
             dp += frictionGradient(cur, xMid, massFlux, w) * length * share;
             if (cur.region == Region.TWO_PHASE) {
-                dp += AccelerationPressureChange.between(VOID, s.props(), flow.diameter(), massFlux, clamp(cur.quality()),
-                        clamp(xEnd), w);
+                dp += flow.accelerationDrop(s.props(), massFlux, cur.quality(), xEnd, w);
             }
             rho += share * chargeDensity(cur, xMid, massFlux, w);
             remaining -= share;
@@ -466,14 +455,10 @@ final class TubeCoilModelMarch {
     static MoistAirState mix(double h, double w, double p) {
         double t = Psychrometrics.dryBulbFromEnthalpy(h, w);
         if (w > Psychrometrics.saturationHumidityRatio(t, p)) {
-            t = SegmentExchange.temperatureOfSaturatedEnthalpy(h, p, t - 30, t + 30);
+            t = SegmentExchange.temperatureOfSaturatedEnthalpy(h, p, t - 30, t + 30, t);
             w = Psychrometrics.saturationHumidityRatio(t, p);
         }
         return new MoistAirState(t, w, p);
-    }
-
-    private static double clamp(double x) {
-        return Math.min(0.999, Math.max(0.001, x));
     }
 
     /** A function of the segment share. */
