@@ -231,8 +231,8 @@ public record Diagnosis(Measurements measurements, MeasuredDuty.Basis basis, Est
                         basis.id(), 100 * above));
             }
             double h = now.airCoefficient();
-            // one extra rating at each end for dQ/dR_f: at R_f and at zero
-            double dR = 0.05 / h;
+            // one extra rating for dQ/dR_f, stepping down where a step up would leave the searched range
+            double dR = r + 0.05 / h <= MAX_FOULING ? 0.05 / h : -0.05 / h;
             Rating nowPlus = rate(m, r + dR);
             double dqdR = (basis.of(nowPlus) - basis.of(now)) / dR;
             double dTotaldR = (nowPlus.capacity() - now.capacity()) / dR;
@@ -292,7 +292,15 @@ public record Diagnosis(Measurements measurements, MeasuredDuty.Basis basis, Est
             CorrelationFactors centre = template.factors();
             CorrelationFactors jUp = new CorrelationFactors(centre.j() * (1 + sigmaJ), centre.f());
             Rating cleanJ = rate(m, 0, jUp);
-            double rJ = solveFouling(m, qm, cleanJ, jUp);
+            double rJ;
+            try {
+                rJ = solveFouling(m, qm, cleanJ, jUp);
+            } catch (InputException e) {
+                rJ = MAX_FOULING;
+                warnings.add("with the air-side correlation's j at the top of its scatter the readings would need more"
+                        + " than the " + MAX_FOULING + " m2 K/W this diagnosis searches: that term is cut there, so the"
+                        + " upper ends of the fouling ranges are understated");
+            }
             Rating nowJ = rJ == 0 ? cleanJ : rate(m, rJ, jUp);
             double perRJ = rJ > 0 && nowJ.resistances().airFouling() > 0 ? nowJ.resistances().airFouling() / rJ : perR;
             Outputs yj = new Outputs(rJ, nowJ.ua(), cleanJ.ua(), rJ * perRJ * cleanJ.ua(), nowJ.capacity(),

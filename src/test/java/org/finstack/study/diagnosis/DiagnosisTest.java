@@ -124,6 +124,15 @@ class DiagnosisTest {
         assertRelative(diagnosis.ua().value(), raised.ua().value(), 0.02, "present UA barely moves with j");
     }
 
+    /** A fouling just below the search bound is diagnosed (the derivative steps down, not out of the range). */
+    @Test
+    void foulingNearTheSearchBoundIsDiagnosed() {
+        CoilCase dirty = condenser(0.0998);
+        Diagnosis d = Diagnosis.of(condenser(0), readings(CoilModels.rate(dirty), dirty, 0), null);
+        assertThat(d.airSideFouling().value()).isCloseTo(0.0998, within(1e-5));
+        assertThat(d.airSideFouling().high()).isGreaterThan(d.airSideFouling().value());
+    }
+
     /**
      * Payback by hand: f = 1 - UA/UA_clean, dT = Q_s,clean/UA_clean, shift = dT f/(1 - f);
      * COP = eta T_e/(T_c - T_e) (Carnot, Stoecker &amp; Jones 1982); the refrigerating duty is the
