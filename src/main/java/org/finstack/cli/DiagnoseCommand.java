@@ -11,6 +11,7 @@ import org.finstack.coil.Duty;
 import org.finstack.core.Citation;
 import org.finstack.io.MeasurementFiles;
 import org.finstack.study.cost.CleaningPayback;
+import org.finstack.study.diagnosis.DepositLevel;
 import org.finstack.study.diagnosis.Diagnosis;
 import org.finstack.study.diagnosis.Estimate;
 import org.finstack.study.diagnosis.HealthyRanges;
@@ -28,21 +29,32 @@ import picocli.CommandLine.Spec;
 
 /**
  * {@code finstack diagnose MEASUREMENTS.json}: infers a coil's present UA and equivalent
- * air-side fouling from field readings, with the clean coil, the loss, their uncertainty, the
- * readings against a healthy coil's ranges and, with cleaning data, the payback.
+ * air-side fouling from field readings, with the clean coil, the loss, the dust deposit level
+ * behind the loss (and behind the air pressure drop, when it was measured), their uncertainty,
+ * the readings against a healthy coil's ranges and, with cleaning data, the payback.
  */
 @Command(name = "diagnose", mixinStandardHelpOptions = true,
-        description = "Infers a coil's fouling and lost capacity from field measurements.")
+        description = {"Infers a coil's fouling, its dust deposit level and the lost capacity from field measurements.",
+                "With measured.airPressureDrop in the file the deposit level is also inferred from the pressure drop."})
 final class DiagnoseCommand implements Callable<Integer> {
 
     /** How the fouling level is defined. */
     static final String LEVEL_DEFINITION = "resistance-based: the inferred air-side fouling resistance of the whole coil,"
             + " R_f / (eta_o A_o), as a fraction of the clean coil's total resistance 1 / UA_clean";
 
+    /** How the deposit level is defined. */
+    static final String DEPOSIT_DEFINITION = "thickness of a dust layer on every air-side surface (JSON: metres), in the"
+            + " terms of the fouling study (conductivity " + org.finstack.core.Numbers.brief(
+                    org.finstack.study.fouling.FoulingLevel.DUST_CONDUCTIVITY) + " W/(m K), from memory; passages"
+            + " narrowed by the layer): depositLevel from the lost duty (k x R_f), depositLevelFromPressureDrop from the"
+            + " measured air pressure drop's rise over the clean coil's at the measured airflow; blocked fraction = share"
+            + " of the clean minimum free-flow area";
+
     /** How the ranges are found. */
     static final String UNCERTAINTY_METHOD = "linear propagation (JCGM 100:2008 eq. 10, inputs uncorrelated) of the"
             + " readings' stated accuracies (limits ±a, standard uncertainty a / sqrt 3) and of the air-side"
-            + " correlation's published j scatter (normal, sigma from the share within its band); p10/p90 = value"
+            + " correlation's published j scatter (normal, sigma from the share within its band; for the deposit level"
+            + " from the pressure drop, its f scatter); the deposit conductivity is not in the ranges; p10/p90 = value"
             + " -/+ 1.2816 u";
 
     @Spec
@@ -87,6 +99,15 @@ final class DiagnoseCommand implements Callable<Integer> {
         o.put("capacityNow_W", d.capacityNow().value());
         o.put("capacityClean_W", d.capacityClean().value());
         o.put("capacityLossFraction", d.capacityLossFraction().value());
+        o.put("depositLevel", d.depositLevel().thickness().value());
+        d.depositLevel().blockedFraction().ifPresent(b -> o.put("depositBlockedFraction", b.value()));
+        d.depositLevelFromPressureDrop().ifPresent(p -> {
+            o.put("depositLevelFromPressureDrop", p.thickness().value());
+            p.blockedFraction().ifPresent(b -> o.put("depositBlockedFractionFromPressureDrop", b.value()));
+        });
+        o.put("depositConductivity_W_mK", d.depositLevel().conductivity());
+        o.put("depositMaxThickness_m", d.depositLevel().maxThickness());
+        o.put("depositLevelDefinition", DEPOSIT_DEFINITION);
         ObjectNode u = o.putObject("uncertainty");
         u.put("method", UNCERTAINTY_METHOD);
         range(u, "measuredDuty_W", d.measuredDuty());
@@ -97,6 +118,12 @@ final class DiagnoseCommand implements Callable<Integer> {
         range(u, "capacityNow_W", d.capacityNow());
         range(u, "capacityClean_W", d.capacityClean());
         range(u, "capacityLossFraction", d.capacityLossFraction());
+        range(u, "depositLevel", d.depositLevel().thickness());
+        d.depositLevel().blockedFraction().ifPresent(b -> range(u, "depositBlockedFraction", b));
+        d.depositLevelFromPressureDrop().ifPresent(p -> {
+            range(u, "depositLevelFromPressureDrop", p.thickness());
+            p.blockedFraction().ifPresent(b -> range(u, "depositBlockedFractionFromPressureDrop", b));
+        });
         ObjectNode budget = u.putObject("airSideFoulingBudget_m2K_W");
         d.foulingBudget().entrySet().stream().sorted(Map.Entry.comparingByKey())
                 .forEach(e -> budget.put(e.getKey(), e.getValue()));
@@ -113,6 +140,9 @@ final class DiagnoseCommand implements Callable<Integer> {
         measured(measured, m.outletConditionName() + "_K", m.outletCondition(), 0);
         if (m.refrigerantMassFlow() != null) {
             measured(measured, "massFlow_kg_s", m.refrigerantMassFlow(), 0);
+        }
+        if (m.airPressureDrop() != null) {
+            measured(measured, "airPressureDrop_Pa", m.airPressureDrop(), 0);
         }
         ArrayNode readings = o.putArray("readings");
         for (HealthyRanges.RangeCheck rc : d.ranges()) {
@@ -169,6 +199,9 @@ final class DiagnoseCommand implements Callable<Integer> {
         reading(out, u, "airflow", m.volumeFlow(), Dimension.VOLUME_FLOW);
         reading(out, u, "saturation", m.saturationTemperature(), Dimension.TEMPERATURE);
         reading(out, u, m.outletConditionName(), m.outletCondition(), Dimension.TEMPERATURE_DIFFERENCE);
+        if (m.airPressureDrop() != null) {
+            reading(out, u, "air pressure drop", m.airPressureDrop(), Dimension.PRESSURE_DIFFERENCE);
+        }
         for (HealthyRanges.RangeCheck rc : d.ranges()) {
             out.printf(Locale.ROOT, "  %-26s %.2f %s   healthy %s to %s %s  %s%n", rc.name(), rc.value(), rc.unit(),
                     org.finstack.core.Numbers.brief(rc.low()), org.finstack.core.Numbers.brief(rc.high()), rc.unit(),
@@ -186,6 +219,9 @@ final class DiagnoseCommand implements Callable<Integer> {
         out.printf(Locale.ROOT, "  %-26s %.3f   (%.3f to %.3f)%n", "fouling level", d.foulingLevel().value(),
                 d.foulingLevel().low(), d.foulingLevel().high());
         out.println("    (" + LEVEL_DEFINITION + ")");
+        deposit(out, u, "deposit (from duty)", d.depositLevel());
+        d.depositLevelFromPressureDrop().ifPresent(p -> deposit(out, u, "deposit (from air dp)", p));
+        out.println("    (" + DEPOSIT_DEFINITION + ")");
         out.println("    (uncertainty: " + UNCERTAINTY_METHOD + ")");
         d.payback().ifPresent(p -> {
             t.section("Cleaning");
@@ -211,6 +247,18 @@ final class DiagnoseCommand implements Callable<Integer> {
         String acc = r.accuracy() > 0 ? "  ± " + Quantities.format(r.accuracy(),
                 d == Dimension.TEMPERATURE ? Dimension.TEMPERATURE_DIFFERENCE : d, u) : "  (accuracy not stated)";
         out.printf(Locale.ROOT, "  %-26s %s%s%n", label, Quantities.format(r.value(), d, u), acc);
+    }
+
+    private static void deposit(PrintWriter out, UnitSystem u, String label, DepositLevel level) {
+        String unit = u == UnitSystem.SI ? "mm" : "in";
+        Estimate t = level.thickness();
+        String blocked = level.blockedFraction().map(b -> String.format(Locale.ROOT, "; blocks %.1f %% (%.1f to %.1f %%) of"
+                + " the free-flow area", 100 * b.value(), 100 * b.low(), 100 * b.high()))
+                .orElse("; thicker than the passages hold (" + Quantities.format(level.maxThickness(), Dimension.LENGTH, u,
+                        unit) + ")");
+        out.printf(Locale.ROOT, "  %-26s %s   (%s to %s)%s%n", label, Quantities.format(t.value(), Dimension.LENGTH, u, unit),
+                Quantities.format(t.low(), Dimension.LENGTH, u, unit), Quantities.format(t.high(), Dimension.LENGTH, u, unit),
+                blocked);
     }
 
     private static void estimate(PrintWriter out, UnitSystem u, String label, Estimate e, Dimension d) {

@@ -19,11 +19,16 @@ import org.finstack.geometry.DerivedGeometry;
  * friction factor from the fin type's correlation, with air properties at a given mean
  * temperature (dry-air transport properties; the moisture's effect on them is well under 1 %).
  *
+ * <p>The case's {@link CorrelationFactors} act here: {@link #of} wraps the fin type's correlation
+ * so that {@link #at} works with {@code j fj} (h_o scales by fj) and {@code f ff} (the core
+ * friction term of {@link #pressureDrop} scales by ff). A flow built directly from another
+ * flow's {@link #correlation()} keeps the factors.
+ *
  * @param inlet       entering moist air
  * @param massFlow    dry-air mass flow [kg/s]
  * @param volumeFlow  volume flow at the inlet state [m3/s]
  * @param derived     the coil's derived geometry
- * @param correlation the air-side correlation
+ * @param correlation the air-side correlation, with the case's correlation factors applied
  * @param surface     what the correlation needs of the coil
  */
 public record AirFlow(MoistAirState inlet, double massFlow, double volumeFlow, DerivedGeometry derived,
@@ -32,7 +37,7 @@ public record AirFlow(MoistAirState inlet, double massFlow, double volumeFlow, D
     /**
      * @param c the case
      * @param d its derived geometry
-     * @return the air through the coil
+     * @return the air through the coil, its correlation carrying the case's correlation factors
      */
     public static AirFlow of(CoilCase c, DerivedGeometry d) {
         AirInlet a = c.air();
@@ -40,7 +45,7 @@ public record AirFlow(MoistAirState inlet, double massFlow, double volumeFlow, D
         MoistAirState in = MoistAirState.fromRelativeHumidity(a.temperature(), a.relativeHumidity(), a.pressure());
         double volume = a.volumeFlow(d.faceArea());
         double dryAirMass = volume * in.density() / (1 + in.humidityRatio());
-        AirSideCorrelation corr = AirSideCorrelations.standard("coil.finType", g.finType());
+        AirSideCorrelation corr = c.factors().applyTo(AirSideCorrelations.standard("coil.finType", g.finType()));
         return new AirFlow(in, dryAirMass, volume, d, corr, IsothermalCoilModel.surface(g, d));
     }
 
@@ -50,7 +55,8 @@ public record AirFlow(MoistAirState inlet, double massFlow, double volumeFlow, D
     }
 
     /**
-     * Air-side heat transfer at a mean air temperature.
+     * Air-side heat transfer at a mean air temperature: j and f from the correlation (times the
+     * case's correlation factors), h_o = j G cp Pr^(-2/3).
      *
      * @param meanTemperature [K]
      * @param w               warnings

@@ -18,9 +18,13 @@ import org.finstack.geometry.CoilGeometry;
  * @param circuiting   the tubes' order per circuit, or {@code null} for the standard pattern
  * @param airProfile   relative face velocity of each tube place from the top (mean 1), or an
  *                     empty list for uniform air
+ * @param factors      multipliers on the air-side correlation's j and f ({@link CorrelationFactors});
+ *                     {@code null} reads as {@link CorrelationFactors#NONE}. An internal hook for
+ *                     the Monte Carlo band and sensitivities, not a case-file key: a case read from
+ *                     a file has NONE
  */
 public record CoilCase(CoilGeometry coil, AirInlet air, RefrigerantSide refrigerant, FoulingResistances fouling,
-        Circuiting circuiting, List<Double> airProfile) {
+        Circuiting circuiting, List<Double> airProfile, CorrelationFactors factors) {
 
     /** Checks all parts are present and fit together. */
     public CoilCase {
@@ -52,6 +56,22 @@ public record CoilCase(CoilGeometry coil, AirInlet air, RefrigerantSide refriger
             double mean = sum / airProfile.size();
             airProfile = airProfile.stream().map(v -> v / mean).toList();
         }
+        factors = factors == null ? CorrelationFactors.NONE : factors;
+    }
+
+    /**
+     * A case with the correlation as published ({@link CorrelationFactors#NONE}).
+     *
+     * @param coil        the coil
+     * @param air         the entering air
+     * @param refrigerant the refrigerant side
+     * @param fouling     added resistances
+     * @param circuiting  the tubes' order per circuit, or {@code null} for the standard pattern
+     * @param airProfile  relative face velocity of each tube place from the top, or an empty list
+     */
+    public CoilCase(CoilGeometry coil, AirInlet air, RefrigerantSide refrigerant, FoulingResistances fouling,
+            Circuiting circuiting, List<Double> airProfile) {
+        this(coil, air, refrigerant, fouling, circuiting, airProfile, CorrelationFactors.NONE);
     }
 
     /**
@@ -80,7 +100,7 @@ public record CoilCase(CoilGeometry coil, AirInlet air, RefrigerantSide refriger
                 && circuiting.tubesPerRow() == geometry.tubesPerRow() && circuiting.count() == geometry.circuits();
         boolean profileFits = airProfile.size() == geometry.tubesPerRow();
         return new CoilCase(geometry, air, refrigerant, fouling, fits ? circuiting : null,
-                profileFits ? airProfile : List.of());
+                profileFits ? airProfile : List.of(), factors);
     }
 
     /**
@@ -88,7 +108,7 @@ public record CoilCase(CoilGeometry coil, AirInlet air, RefrigerantSide refriger
      * @return this case with other added resistances
      */
     public CoilCase withFouling(FoulingResistances f) {
-        return new CoilCase(coil, air, refrigerant, f, circuiting, airProfile);
+        return new CoilCase(coil, air, refrigerant, f, circuiting, airProfile, factors);
     }
 
     /**
@@ -96,7 +116,7 @@ public record CoilCase(CoilGeometry coil, AirInlet air, RefrigerantSide refriger
      * @return this case with it
      */
     public CoilCase withRefrigerant(RefrigerantSide r) {
-        return new CoilCase(coil, air, r, fouling, circuiting, airProfile);
+        return new CoilCase(coil, air, r, fouling, circuiting, airProfile, factors);
     }
 
     /**
@@ -104,6 +124,14 @@ public record CoilCase(CoilGeometry coil, AirInlet air, RefrigerantSide refriger
      * @return this case with it
      */
     public CoilCase withAir(AirInlet a) {
-        return new CoilCase(coil, a, refrigerant, fouling, circuiting, airProfile);
+        return new CoilCase(coil, a, refrigerant, fouling, circuiting, airProfile, factors);
+    }
+
+    /**
+     * @param f multipliers on the air-side correlation's j and f
+     * @return this case with them (in place of any it had)
+     */
+    public CoilCase withFactors(CorrelationFactors f) {
+        return new CoilCase(coil, air, refrigerant, fouling, circuiting, airProfile, f);
     }
 }

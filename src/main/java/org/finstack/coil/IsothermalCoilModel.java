@@ -36,6 +36,7 @@ import org.finstack.geometry.DerivedGeometry;
  * free-flow area; Colburn j and Fanning f from the fin type's correlation; h = j G cp Pr^(-2/3);
  * fin efficiency (Schmidt) and surface effectiveness; the series resistances; UA, NTU, eps;
  * the air-side pressure drop from the Kays &amp; London core equation with the correlation's f.
+ * The case's {@link CorrelationFactors} multiply j and f as in {@link AirFlow}.
  */
 public final class IsothermalCoilModel {
 
@@ -70,7 +71,7 @@ public final class IsothermalCoilModel {
         RefrigerantSide ref = c.refrigerant();
         checkDirection(air, ref);
         org.finstack.fluid.Fluids.byName(ref.fluid()); // an unknown or unsupported refrigerant is refused by name
-        AirSideCorrelation correlation = AirSideCorrelations.standard("coil.finType", g.finType());
+        AirSideCorrelation correlation = c.factors().applyTo(AirSideCorrelations.standard("coil.finType", g.finType()));
         AirSideSurface surface = surface(g, d);
         PlateFinCell cell = new PlateFinCell(d.collarDiameter(), g.finThickness(), g.transversePitch(),
                 g.rowPitch(), g.arrangement() == Arrangement.STAGGERED);

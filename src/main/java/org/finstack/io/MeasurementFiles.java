@@ -28,12 +28,15 @@ import org.finstack.units.Dimension;
  *     {@code volumeFlow} (at the entering state), {@code saturationTemperature} (dew point from
  *     the suction or discharge pressure), {@code superheat} (evaporator) or {@code subcooling}
  *     (condenser); optional {@code airOutletRelativeHumidity} (then the total duty is matched,
- *     else the sensible) and {@code massFlow} (refrigerant, a cross-check). Each is a quantity
+ *     else the sensible), {@code massFlow} (refrigerant, a cross-check) and {@code airPressureDrop}
+ *     (static pressure difference across the coil at the measured airflow, e.g. from a manometer
+ *     across the coil, {@code "85 Pa"} or {@code "0.34 in. w.c."}; when given, the dust deposit
+ *     level is also inferred from its rise over the clean coil's). Each is a quantity
  *     ({@code "24.5 C"}, or a bare SI number) or {@code { "value": ..., "accuracy": ... }}. The
  *     accuracy is the instrument's stated limit ±a in the value's unit (a temperature's as a
  *     difference, e.g. {@code "0.5 K"}), read as a rectangular distribution (standard uncertainty
  *     a / sqrt 3); for airflow and mass flow it may be a percentage of the value
- *     ({@code "10 %"}); for a relative humidity a percentage is in humidity points
+ *     ({@code "10 %"}), and so for the air pressure drop; for a relative humidity a percentage is in humidity points
  *     ({@code "3 %"} is ±0.03).</li>
  * <li>{@code air} (optional): only {@code pressure} (barometric, default 101 325 Pa) and
  *     {@code faceVelocityProfile}; the entering state and airflow are readings.</li>
@@ -55,7 +58,7 @@ public final class MeasurementFiles {
     private static final Set<String> AIR = Set.of("pressure", "faceVelocityProfile");
     private static final Set<String> MEASURED = Set.of("airInletTemperature", "airOutletTemperature",
             "airInletRelativeHumidity", "airOutletRelativeHumidity", "volumeFlow", "saturationTemperature", "superheat",
-            "subcooling", "massFlow");
+            "subcooling", "massFlow", "airPressureDrop");
     private static final Set<String> READINGS_IN_REFRIGERANT = Set.of("saturationTemperature", "superheat", "subcooling",
             "massFlow", "requiredCapacity");
     private static final Set<String> VALUE = Set.of("value", "accuracy");
@@ -144,7 +147,8 @@ public final class MeasurementFiles {
                 reading(measured, "volumeFlow", Dimension.VOLUME_FLOW),
                 reading(measured, "saturationTemperature", Dimension.TEMPERATURE),
                 reading(measured, held, Dimension.TEMPERATURE_DIFFERENCE),
-                reading(measured, "massFlow", Dimension.MASS_FLOW), pressure);
+                reading(measured, "massFlow", Dimension.MASS_FLOW), pressure,
+                reading(measured, "airPressureDrop", Dimension.PRESSURE_DIFFERENCE));
         refNode.put("saturationTemperature", m.saturationTemperature().value());
         refNode.put(held, m.outletCondition().value());
         RefrigerantSide refrigerant = CaseFiles.refrigerant(new JsonFields(refNode, "refrigerant"));
@@ -181,7 +185,8 @@ public final class MeasurementFiles {
             JsonNode a = v.get("accuracy");
             String af = field + ".accuracy";
             if (a.isTextual() && a.asText().strip().endsWith("%")
-                    && (dim == Dimension.VOLUME_FLOW || dim == Dimension.MASS_FLOW)) {
+                    && (dim == Dimension.VOLUME_FLOW || dim == Dimension.MASS_FLOW
+                            || dim == Dimension.PRESSURE_DIFFERENCE)) {
                 String number = a.asText().strip();
                 accuracy = Math.abs(value) * JsonFields.quantityValue(
                         com.fasterxml.jackson.databind.node.TextNode.valueOf(number), af, Dimension.DIMENSIONLESS);

@@ -43,7 +43,7 @@ class DiagnoseCommandTest {
         assertThat(r.out()).doesNotContain("NaN").doesNotContain("Infinity");
         JsonNode res = new ObjectMapper().readTree(r.out()).get("results");
         List<String> keys = List.of("UA_W_K", "cleanUA_W_K", "foulingLevel", "airSideFouling_m2K_W", "capacityNow_W",
-                "capacityClean_W", "capacityLossFraction");
+                "capacityClean_W", "capacityLossFraction", "depositLevel", "depositBlockedFraction");
         for (String k : keys) {
             assertThat(res.has(k)).as(k).isTrue();
             JsonNode u = res.get("uncertainty").get(k);
@@ -52,6 +52,11 @@ class DiagnoseCommandTest {
             assertThat(u.get("p90").asDouble()).as(k).isGreaterThanOrEqualTo(res.get(k).asDouble());
         }
         assertThat(res.get("foulingLevelDefinition").asText()).startsWith("resistance-based");
+        assertThat(res.get("depositLevelDefinition").asText()).startsWith("thickness of a dust layer");
+        // the deposit model's conductivity (FoulingLevel.DUST_CONDUCTIVITY) times R_f
+        assertThat(res.get("depositLevel").asDouble()).isCloseTo(0.1 * res.get("airSideFouling_m2K_W").asDouble(),
+                org.assertj.core.data.Offset.offset(1e-12));
+        assertThat(res.has("depositLevelFromPressureDrop")).as("no pressure drop was measured").isFalse();
         assertThat(res.get("airSideFouling_m2K_W").asDouble()).isPositive();
         assertThat(res.get("cleanUA_W_K").asDouble()).isGreaterThan(res.get("UA_W_K").asDouble());
         assertThat(res.get("readings").get(0).get("basis").asText()).isEqualTo("common practice");
@@ -65,6 +70,33 @@ class DiagnoseCommandTest {
                 .isCloseTo(260 / 3600.0, org.assertj.core.data.Offset.offset(1e-12));
         assertThat(res.get("payback").get("summary").asText()).startsWith("Cleaning this condenser");
         assertThat(res.get("payback").get("paybackYears").asDouble()).isPositive();
+    }
+
+    /** The condenser example with a manometer reading across the coil (accuracy as a share of the value). */
+    @Test
+    void aMeasuredAirPressureDropGivesTheSecondDepositLevel() throws IOException {
+        Path f = dir.resolve("dp.json");
+        Files.writeString(f, Files.readString(Path.of(CONDENSER)).replace("\"massFlow\": {",
+                "\"airPressureDrop\": { \"value\": \"75 Pa\", \"accuracy\": \"4 %\" },\n    \"massFlow\": {"));
+        Run r = run("diagnose", f.toString(), "--json");
+        assertThat(r.code()).as(r.err()).isZero();
+        assertThat(r.out()).doesNotContain("NaN").doesNotContain("Infinity");
+        JsonNode res = new ObjectMapper().readTree(r.out()).get("results");
+        for (String k : List.of("depositLevel", "depositLevelFromPressureDrop", "depositBlockedFractionFromPressureDrop")) {
+            JsonNode u = res.get("uncertainty").get(k);
+            assertThat(u).as(k + " range").isNotNull();
+            assertThat(u.get("p10").asDouble()).as(k).isLessThan(res.get(k).asDouble());
+            assertThat(u.get("p90").asDouble()).as(k).isGreaterThan(res.get(k).asDouble());
+        }
+        assertThat(res.get("depositLevelFromPressureDrop").asDouble()).isPositive()
+                .isLessThan(res.get("depositMaxThickness_m").asDouble());
+        // 4 % of 75 Pa as the reading's limit
+        assertThat(res.get("measured").get("airPressureDrop_Pa").get("accuracy").asDouble())
+                .isCloseTo(3.0, org.assertj.core.data.Offset.offset(1e-12));
+        Run table = run("diagnose", f.toString());
+        assertThat(table.code()).as(table.err()).isZero();
+        assertThat(table.out()).contains("air pressure drop", "deposit (from duty)", "deposit (from air dp)",
+                "of the free-flow area");
     }
 
     @Test
@@ -89,6 +121,8 @@ class DiagnoseCommandTest {
                 "\"air\": { \"pressure\": \"101.325 kPa\" }, \"fouling\": { \"airSide\": \"0.0002 m2 K/W\" }"), "fouling.airSide");
         refused(base.replace("\"accuracy\": \"0.3 K\"", "\"accuracy\": \"-0.3 K\""), "measured.airInletTemperature.accuracy");
         refused(base.replace("\"runHours\": 3000,", ""), "cleaning.runHours");
+        refused(base.replace("\"massFlow\": {", "\"airPressureDrop\": \"-5 Pa\", \"massFlow\": {"), "measured.airPressureDrop");
+        refused(base.replace("\"massFlow\": {", "\"airPressureDrop\": \"50 kPa\", \"massFlow\": {"), "measured.airPressureDrop");
     }
 
     private void refused(String json, String field) throws IOException {

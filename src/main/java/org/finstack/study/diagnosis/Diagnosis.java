@@ -12,6 +12,7 @@ import org.finstack.airside.AirSideCorrelation;
 import org.finstack.airside.AirSideCorrelations;
 import org.finstack.coil.CoilCase;
 import org.finstack.coil.CoilModels;
+import org.finstack.coil.CorrelationFactors;
 import org.finstack.coil.Duty;
 import org.finstack.coil.FoulingResistances;
 import org.finstack.coil.Rating;
@@ -26,6 +27,9 @@ import org.finstack.study.cost.FouledCoil;
 import org.finstack.study.cost.SaturationShift;
 import org.finstack.study.cost.Tariff;
 import org.finstack.study.diagnosis.Measurements.Input;
+import org.finstack.study.fouling.DepositLayer;
+import org.finstack.study.fouling.FoulingLevel;
+import org.finstack.study.fouling.FoulingStudy;
 import org.finstack.study.uncertainty.NormalCoverage;
 
 /**
@@ -50,12 +54,36 @@ import org.finstack.study.uncertainty.NormalCoverage;
  * derivative dR_f/dx = (dQ_m/dx - dQ_model/dx) / (dQ_model/dR_f), then every output through
  * its own dependence on x and R_f. Inputs: each reading with its stated accuracy (standard
  * uncertainty a / sqrt 3, {@link Reading}), and the air-side correlation's j, whose factor s has
- * the standard deviation of its published scatter ({@link NormalCoverage}). A coil whose true j
- * is s times the correlation's has its air film 1/(s h_o) in place of 1/h_o: the same total
- * resistance is split differently, R_f,true = R_f + (1 - 1/s)/h_o, so the j scatter moves the
- * fouling, the clean UA and capacity and the loss, not the present UA or capacity (the fins'
- * efficiency change with h_o is neglected). Ranges are value ∓ 1.2816 u (10th to 90th
- * percentile of a normal distribution), held at zero for R_f and the level.
+ * the standard deviation sigma_j of its published scatter ({@link NormalCoverage}). The j term
+ * is found by diagnosing again with the correlation's j times s = 1 + sigma_j
+ * ({@link CorrelationFactors} on the case): the clean coil re-rated and R_f solved anew, so the
+ * whole model (air film, fin efficiency, wet-coil split) responds; its difference from the
+ * nominal diagnosis is that input's contribution to every output. A better air film leaves
+ * more of the measured shortfall to the dirt: the j scatter moves the fouling, the clean UA and
+ * capacity and the loss much more than the present UA or capacity. Ranges are value ∓ 1.2816 u
+ * (10th to 90th percentile of a normal distribution), held at zero for R_f and the levels.
+ *
+ * <p><b>Deposit level from the duty.</b> The same loss in the physical terms of the fouling study
+ * ({@link FoulingLevel}): a dust layer of thickness delta and conductivity k
+ * ({@link FoulingLevel#DUST_CONDUCTIVITY}) whose "thermal" case (the clean coil with delta / k
+ * added to its air-side fouling, at the airflow through the coil) delivers the measured duty.
+ * At the measured airflow that case is the one rated at R_f, so delta = k R_f exactly, with
+ * u(delta) = k u(R_f); the share of the free-flow area it blocks follows from
+ * {@link DepositLayer}. The level rests on the deposit conductivity, which is from memory (see
+ * {@link FoulingLevel}) and not in the range. A layer beyond what the passages hold
+ * ({@link DepositLayer#maxThickness}) is reported with a warning: dust alone cannot explain
+ * such a loss.
+ *
+ * <p><b>Deposit level from the air pressure drop</b> (when it is measured): the rise of the
+ * measured pressure drop over the clean coil's model value at the measured airflow is traced to
+ * a deposit thickness by {@link FoulingStudy#infer} (airflow held at the measured value: the
+ * fan's share is already in the reading). Its uncertainty by linear propagation at the found
+ * thickness: {@code u(delta)^2 = sum (c_x u_x / (d dp / d delta))^2} over the pressure-drop
+ * reading (c = 1), the airflow and entering-air readings (c = d dp / d x of the fouled model)
+ * and the friction correlation's f, whose factor has the standard deviation sigma_f of its
+ * published scatter (c = the change of the fouled model's dp with f times 1 + sigma_f, through
+ * {@link CorrelationFactors}). The two levels disagreeing beyond their ranges is reported: the
+ * loss is then not (only) a dust layer, or the dust is not the assumed conductivity.
  *
  * <p><b>Payback</b> (when cleaning data are given): the UA lost, f = 1 - UA/UA_clean, on the clean
  * coil's mean temperature difference dT = Q_s,clean / UA_clean shifts the saturation temperature by
@@ -73,6 +101,9 @@ import org.finstack.study.uncertainty.NormalCoverage;
  * @param capacityNow   the model's total capacity at R_f [W]
  * @param capacityClean the clean coil's total capacity at the same conditions [W]
  * @param capacityLossFraction 1 - capacityNow / capacityClean [-]
+ * @param depositLevel  the dust layer that explains the measured duty (fouling-study terms)
+ * @param depositLevelFromPressureDrop the dust layer that explains the measured air pressure
+ *                      drop, if it was measured
  * @param foulingBudget each input's contribution to u(R_f) [m2 K/W], by its key
  * @param now           the rating at R_f
  * @param clean         the clean rating
@@ -84,7 +115,8 @@ public record Diagnosis(Measurements measurements, MeasuredDuty.Basis basis, Est
         Estimate airSideFouling, Estimate ua, Estimate cleanUa, Estimate foulingLevel, Estimate capacityNow,
         Estimate capacityClean, Estimate capacityLossFraction, Map<String, Double> foulingBudget, Rating now,
         Rating clean, List<HealthyRanges.RangeCheck> ranges, List<String> warnings,
-        Optional<CleaningPayback> payback) {
+        Optional<CleaningPayback> payback, DepositLevel depositLevel,
+        Optional<DepositLevel> depositLevelFromPressureDrop) {
 
     /** Largest air-side fouling resistance searched [m2 K/W] (the bound FoulingResistances accepts). */
     public static final double MAX_FOULING = 0.1;
@@ -143,20 +175,29 @@ public record Diagnosis(Measurements measurements, MeasuredDuty.Basis basis, Est
         }
 
         private Rating rate(Measurements readings, double fouling) {
-            CoilCase c = readings.applyTo(template);
+            return rate(readings, fouling, template.factors());
+        }
+
+        private Rating rate(Measurements readings, double fouling, CorrelationFactors factors) {
+            CoilCase c = readings.applyTo(template).withFactors(factors);
             FoulingResistances f = c.fouling();
             return CoilModels.rate(c.withFouling(new FoulingResistances(fouling, f.inside(), f.contact())));
         }
 
         /** R_f for a measured duty, given the clean rating at the same readings. */
         private double solveFouling(Measurements readings, double duty, Rating cleanRating) {
+            return solveFouling(readings, duty, cleanRating, template.factors());
+        }
+
+        /** R_f for a measured duty with the given correlation factors, given the clean rating with them. */
+        private double solveFouling(Measurements readings, double duty, Rating cleanRating, CorrelationFactors k) {
             double q0 = basis.of(cleanRating);
             if (duty >= q0) {
                 return 0;
             }
             double lo = 0;
             double hi = Math.min(MAX_FOULING, 2e-4);
-            double fHi = basis.of(rate(readings, hi)) - duty;
+            double fHi = basis.of(rate(readings, hi, k)) - duty;
             while (fHi > 0) {
                 if (hi >= MAX_FOULING) {
                     throw new InputException("measured.airOutletTemperature", Msg.IMPOSSIBLE, String.format(Locale.ROOT,
@@ -166,13 +207,13 @@ public record Diagnosis(Measurements measurements, MeasuredDuty.Basis basis, Est
                 }
                 lo = hi;
                 hi = Math.min(MAX_FOULING, hi * 4);
-                fHi = basis.of(rate(readings, hi)) - duty;
+                fHi = basis.of(rate(readings, hi, k)) - duty;
             }
             BrentSolver brent = new BrentSolver(1e-12, 1e-9);
             double a = lo;
             double b = hi;
             try {
-                return brent.solve(MAX_EVALUATIONS, r -> (basis.of(rate(readings, r)) - duty) / duty, a, b);
+                return brent.solve(MAX_EVALUATIONS, r -> (basis.of(rate(readings, r, k)) - duty) / duty, a, b);
             } catch (TooManyEvaluationsException e) {
                 throw new ConvergenceException("air-side fouling resistance", MAX_EVALUATIONS, b - a);
             }
@@ -190,14 +231,12 @@ public record Diagnosis(Measurements measurements, MeasuredDuty.Basis basis, Est
                         basis.id(), 100 * above));
             }
             double h = now.airCoefficient();
-            // one extra rating at each end for dQ/dR_f: at R_f and at zero
-            double dR = 0.05 / h;
+            // one extra rating for dQ/dR_f, stepping down where a step up would leave the searched range
+            double dR = r + 0.05 / h <= MAX_FOULING ? 0.05 / h : -0.05 / h;
             Rating nowPlus = rate(m, r + dR);
             double dqdR = (basis.of(nowPlus) - basis.of(now)) / dR;
             double dTotaldR = (nowPlus.capacity() - now.capacity()) / dR;
             double dUadR = (nowPlus.ua() - now.ua()) / dR;
-            Rating cleanPlus = r == 0 ? nowPlus : rate(m, dR);
-            double dCleandR = (cleanPlus.capacity() - clean.capacity()) / dR;
             double perR = now.resistances().airFouling() > 0 ? now.resistances().airFouling() / r
                     : nowPlus.resistances().airFouling() / (r + dR);
             Outputs base = new Outputs(r, now.ua(), clean.ua(), r * perR * clean.ua(), now.capacity(), clean.capacity());
@@ -247,22 +286,31 @@ public record Diagnosis(Measurements measurements, MeasuredDuty.Basis basis, Est
                 budget.put(in == Input.OUTLET_CONDITION ? m.outletConditionName() : in.key(),
                         Math.abs((yi[0] - y0[0]) / step * u));
             }
-            // the air-side correlation's j scatter: s = 1 + sigma_j
+            // the air-side correlation's j scatter: the diagnosis again with j x (1 + sigma_j)
             AirSideCorrelation corr = AirSideCorrelations.standard("coil.finType", template.coil().finType());
             double sigmaJ = NormalCoverage.sigma(corr.scatterJ(), corr.scatterBand());
-            double s = 1 + sigmaJ;
-            double shift = (1 - 1 / s) / h;
-            double filmClean = clean.resistances().airFilm() + clean.resistances().fin();
-            double cleanUaJ = 1 / (1 / clean.ua() + filmClean * (1 / s - 1));
-            double cleanCapJ = clean.capacity() + dCleandR * (1 / s - 1) / h;
-            Outputs yj = new Outputs(r + shift, now.ua(), cleanUaJ, (r + shift) * perR * cleanUaJ, now.capacity(),
-                    cleanCapJ);
+            CorrelationFactors centre = template.factors();
+            CorrelationFactors jUp = new CorrelationFactors(centre.j() * (1 + sigmaJ), centre.f());
+            Rating cleanJ = rate(m, 0, jUp);
+            double rJ;
+            try {
+                rJ = solveFouling(m, qm, cleanJ, jUp);
+            } catch (InputException e) {
+                rJ = MAX_FOULING;
+                warnings.add("with the air-side correlation's j at the top of its scatter the readings would need more"
+                        + " than the " + MAX_FOULING + " m2 K/W this diagnosis searches: that term is cut there, so the"
+                        + " upper ends of the fouling ranges are understated");
+            }
+            Rating nowJ = rJ == 0 ? cleanJ : rate(m, rJ, jUp);
+            double perRJ = rJ > 0 && nowJ.resistances().airFouling() > 0 ? nowJ.resistances().airFouling() / rJ : perR;
+            Outputs yj = new Outputs(rJ, nowJ.ua(), cleanJ.ua(), rJ * perRJ * cleanJ.ua(), nowJ.capacity(),
+                    cleanJ.capacity());
             double[] yjs = yj.all();
             for (int k = 0; k < yjs.length; k++) {
                 double c = yjs[k] - y0[k];
                 u2[k] += c * c;
             }
-            budget.put("airSideCorrelation.j", Math.abs(shift));
+            budget.put("airSideCorrelation.j", Math.abs(rJ - r));
             Estimate fouling = Estimate.of(r, Math.sqrt(u2[0]), true);
             Estimate level = Estimate.of(y0[3], Math.sqrt(u2[3]), true);
             checkMassFlow(now);
@@ -277,10 +325,97 @@ public record Diagnosis(Measurements measurements, MeasuredDuty.Basis basis, Est
             now.warnings().forEach(warnings::add);
             Optional<CleaningPayback> payback = cleaning == null ? Optional.empty()
                     : Optional.of(payback(cleaning, now, clean));
+            double k = FoulingLevel.DUST_CONDUCTIVITY;
+            DepositLevel fromDuty = DepositLevel.of(template.coil(),
+                    Estimate.of(k * r, k * fouling.standardUncertainty(), true), k);
+            if (fromDuty.beyondModel()) {
+                warnings.add(String.format(Locale.ROOT, "the lost duty would need a dust layer %s mm thick (at %s W/(m K)),"
+                        + " more than this coil's passages hold (%s mm): dust on the fins alone cannot explain it; look at"
+                        + " the refrigerant side (charge, expansion valve, inside fouling) and the readings",
+                        trim(fromDuty.thickness().value() * 1e3), trim(k), trim(fromDuty.maxThickness() * 1e3)));
+            }
+            Optional<DepositLevel> fromDp = m.airPressureDrop() == null ? Optional.empty()
+                    : Optional.of(depositFromPressureDrop(clean, k, corr));
+            fromDp.ifPresent(p -> agreement(fromDuty, p));
             return new Diagnosis(m, basis, Estimate.of(qm, Math.sqrt(uDuty2), true), fouling,
                     Estimate.of(y0[1], Math.sqrt(u2[1]), true), Estimate.of(y0[2], Math.sqrt(u2[2]), true), level,
                     Estimate.of(y0[4], Math.sqrt(u2[4]), true), Estimate.of(y0[5], Math.sqrt(u2[5]), true),
-                    Estimate.of(y0[6], Math.sqrt(u2[6]), false), budget, now, clean, ranges, warnings.list(), payback);
+                    Estimate.of(y0[6], Math.sqrt(u2[6]), false), budget, now, clean, ranges, warnings.list(), payback,
+                    fromDuty, fromDp);
+        }
+
+        /** The fouled coil's model air pressure drop at a deposit thickness, for the readings. */
+        private double hydraulicDrop(Measurements readings, double thickness, double k, CorrelationFactors f) {
+            CoilCase c = readings.applyTo(template).withFactors(f);
+            return CoilModels.rate(new FoulingLevel(thickness, k).applyTo(c).hydraulic()).airPressureDrop();
+        }
+
+        /** The deposit behind the measured air pressure drop, with its range. */
+        private DepositLevel depositFromPressureDrop(Rating clean, double k, AirSideCorrelation corr) {
+            Reading dp = m.airPressureDrop();
+            CoilCase cleanCase = m.applyTo(template);
+            CorrelationFactors f0 = template.factors();
+            double rise = dp.value() - clean.airPressureDrop();
+            double max = DepositLayer.maxThickness(template.coil());
+            double delta = 0;
+            if (rise <= 0) {
+                warnings.add(String.format(Locale.ROOT, "the measured air pressure drop %s Pa is not above the clean coil's"
+                        + " model value %s Pa at the measured airflow: no deposit can be inferred from it (the friction"
+                        + " correlation's scatter, or the reading)", trim(dp.value()), trim(clean.airPressureDrop())));
+            } else {
+                double top = hydraulicDrop(m, max, k, f0);
+                if (dp.value() > top) {
+                    throw new InputException("measured.airPressureDrop", Msg.IMPOSSIBLE, String.format(Locale.ROOT,
+                            "is %s Pa; even a %s mm deposit, which nearly closes this coil's passages, gives only %s Pa"
+                                    + " at the measured airflow (%s Pa clean): check the reading and the airflow",
+                            trim(dp.value()), trim(max * 1e3), trim(top), trim(clean.airPressureDrop())));
+                }
+                delta = FoulingStudy.infer(cleanCase, null, k, rise).level().thickness();
+            }
+            // d dp / d delta between two layers on the fouled side of the found one
+            double h = Math.max(1e-6, 0.05 * delta);
+            double a = delta == 0 ? h : delta;
+            double b = a + h;
+            if (b > max) {
+                b = delta;
+                a = delta - h;
+            }
+            double slope = (hydraulicDrop(m, b, k, f0) - hydraulicDrop(m, a, k, f0)) / (b - a);
+            if (!(slope > 0)) {
+                throw new InputException("measured.airPressureDrop", Msg.IMPOSSIBLE,
+                        "cannot be traced to a deposit: this coil's modelled pressure drop does not rise with it");
+            }
+            double dp0 = hydraulicDrop(m, delta, k, f0);
+            double u2 = Math.pow(dp.standardUncertainty() / slope, 2);
+            for (Input in : new Input[] {Input.VOLUME_FLOW, Input.AIR_INLET_TEMPERATURE}) {
+                Reading reading = m.get(in);
+                if (reading.accuracy() == 0) {
+                    continue;
+                }
+                double step = direction(in, reading.value()) * (in == Input.VOLUME_FLOW ? 0.05 * reading.value() : 0.2);
+                double moved = hydraulicDrop(m.with(in, reading.value() + step), delta, k, f0);
+                u2 += Math.pow((moved - dp0) / step * reading.standardUncertainty() / slope, 2);
+            }
+            double sigmaF = NormalCoverage.sigma(corr.scatterF(), corr.scatterBand());
+            double withF = hydraulicDrop(m, delta, k, new CorrelationFactors(f0.j(), f0.f() * (1 + sigmaF)));
+            u2 += Math.pow((withF - dp0) / slope, 2);
+            return DepositLevel.of(template.coil(), Estimate.of(delta, Math.sqrt(u2), true), k);
+        }
+
+        /** Says so when the two deposit levels' ranges do not overlap. */
+        private void agreement(DepositLevel fromDuty, DepositLevel fromDp) {
+            Estimate a = fromDuty.thickness();
+            Estimate b = fromDp.thickness();
+            if (a.high() < b.low() || b.high() < a.low()) {
+                warnings.add(String.format(Locale.ROOT, "the deposit the lost duty implies (%s mm, %s to %s) and the one the"
+                        + " air pressure drop implies (%s mm, %s to %s) disagree: the loss is not (only) a dust layer of"
+                        + " the assumed conductivity (%s W/(m K)) - %s", trim(a.value() * 1e3), trim(a.low() * 1e3),
+                        trim(a.high() * 1e3), trim(b.value() * 1e3), trim(b.low() * 1e3), trim(b.high() * 1e3),
+                        trim(fromDuty.conductivity()), a.value() > b.value()
+                                ? "more duty is lost than the pressure drop explains: look at the refrigerant side too"
+                                : "the pressure drop rose more than the duty fell: a fibrous or oily deposit on the face,"
+                                        + " or the airflow reading"));
+            }
         }
 
         /** Steps go inwards where a reading sits at a bound (humidity 1, superheat 0). */

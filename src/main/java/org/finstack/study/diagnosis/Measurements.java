@@ -32,10 +32,14 @@ import org.finstack.fluid.psychro.Psychrometrics;
  * @param outletCondition           superheat (evaporator) or subcooling (condenser) at the outlet [K]
  * @param refrigerantMassFlow       refrigerant mass flow [kg/s], or {@code null} if not measured
  * @param pressure                  barometric pressure [Pa]
+ * @param airPressureDrop           air-side pressure drop across the coil at the measured airflow
+ *                                  [Pa], or {@code null} if not measured (then no deposit level is
+ *                                  inferred from it)
  */
 public record Measurements(Duty duty, Reading airInletTemperature, Reading airOutletTemperature,
         Reading airInletRelativeHumidity, Reading airOutletRelativeHumidity, Reading volumeFlow,
-        Reading saturationTemperature, Reading outletCondition, Reading refrigerantMassFlow, double pressure) {
+        Reading saturationTemperature, Reading outletCondition, Reading refrigerantMassFlow, double pressure,
+        Reading airPressureDrop) {
 
     private static final double KELVIN = 273.15;
 
@@ -71,6 +75,9 @@ public record Measurements(Duty duty, Reading airInletTemperature, Reading airOu
         Check.within("measured." + held, outletCondition.value(), 0, evaporator ? 60 : 40);
         if (refrigerantMassFlow != null) {
             Check.positive("measured.massFlow", refrigerantMassFlow.value());
+        }
+        if (airPressureDrop != null) {
+            Check.positive("measured.airPressureDrop", airPressureDrop.value());
         }
         if (evaporator) {
             if (!(tOut < tIn)) {
@@ -108,6 +115,37 @@ public record Measurements(Duty duty, Reading airInletTemperature, Reading airOu
                         tSat - KELVIN, tIn - KELVIN);
             }
         }
+    }
+
+    /**
+     * Readings without the air pressure drop.
+     *
+     * @param duty                      evaporator or condenser
+     * @param airInletTemperature       entering dry bulb [K]
+     * @param airOutletTemperature      leaving dry bulb, mixed [K]
+     * @param airInletRelativeHumidity  entering relative humidity [-], or {@code null} for a condenser
+     * @param airOutletRelativeHumidity leaving relative humidity [-], or {@code null}
+     * @param volumeFlow                airflow at the entering state [m3/s]
+     * @param saturationTemperature     refrigerant saturation temperature [K]
+     * @param outletCondition           superheat or subcooling [K]
+     * @param refrigerantMassFlow       refrigerant mass flow [kg/s], or {@code null}
+     * @param pressure                  barometric pressure [Pa]
+     */
+    public Measurements(Duty duty, Reading airInletTemperature, Reading airOutletTemperature,
+            Reading airInletRelativeHumidity, Reading airOutletRelativeHumidity, Reading volumeFlow,
+            Reading saturationTemperature, Reading outletCondition, Reading refrigerantMassFlow, double pressure) {
+        this(duty, airInletTemperature, airOutletTemperature, airInletRelativeHumidity, airOutletRelativeHumidity,
+                volumeFlow, saturationTemperature, outletCondition, refrigerantMassFlow, pressure, null);
+    }
+
+    /**
+     * @param dp the air pressure drop reading [Pa], or {@code null}
+     * @return these readings with it
+     */
+    public Measurements withAirPressureDrop(Reading dp) {
+        return new Measurements(duty, airInletTemperature, airOutletTemperature, airInletRelativeHumidity,
+                airOutletRelativeHumidity, volumeFlow, saturationTemperature, outletCondition, refrigerantMassFlow,
+                pressure, dp);
     }
 
     private static void required(String key, Reading r) {
@@ -168,6 +206,7 @@ public record Measurements(Duty duty, Reading airInletTemperature, Reading airOu
         Reading v = volumeFlow;
         Reading sat = saturationTemperature;
         Reading out = outletCondition;
+        Reading dp = airPressureDrop;
         switch (input) {
             case AIR_INLET_TEMPERATURE -> tin = new Reading(value, tin.accuracy());
             case AIR_OUTLET_TEMPERATURE -> tout = new Reading(value, tout.accuracy());
@@ -176,9 +215,10 @@ public record Measurements(Duty duty, Reading airInletTemperature, Reading airOu
             case VOLUME_FLOW -> v = new Reading(value, v.accuracy());
             case SATURATION_TEMPERATURE -> sat = new Reading(value, sat.accuracy());
             case OUTLET_CONDITION -> out = new Reading(value, out.accuracy());
+            case AIR_PRESSURE_DROP -> dp = new Reading(value, dp.accuracy());
             default -> throw new IllegalArgumentException(input.name());
         }
-        return new Measurements(duty, tin, tout, rhIn, rhOut, v, sat, out, refrigerantMassFlow, pressure);
+        return new Measurements(duty, tin, tout, rhIn, rhOut, v, sat, out, refrigerantMassFlow, pressure, dp);
     }
 
     /**
@@ -194,6 +234,7 @@ public record Measurements(Duty duty, Reading airInletTemperature, Reading airOu
             case VOLUME_FLOW -> volumeFlow;
             case SATURATION_TEMPERATURE -> saturationTemperature;
             case OUTLET_CONDITION -> outletCondition;
+            case AIR_PRESSURE_DROP -> airPressureDrop;
         };
     }
 
@@ -205,7 +246,8 @@ public record Measurements(Duty duty, Reading airInletTemperature, Reading airOu
         AIR_OUTLET_HUMIDITY("airOutletRelativeHumidity"),
         VOLUME_FLOW("volumeFlow"),
         SATURATION_TEMPERATURE("saturationTemperature"),
-        OUTLET_CONDITION("superheat/subcooling");
+        OUTLET_CONDITION("superheat/subcooling"),
+        AIR_PRESSURE_DROP("airPressureDrop");
 
         private final String key;
 

@@ -7,7 +7,7 @@ import org.finstack.airside.AirSideCorrelations;
 import org.finstack.coil.AirInlet;
 import org.finstack.coil.CoilCase;
 import org.finstack.coil.CoilModels;
-import org.finstack.coil.FoulingResistances;
+import org.finstack.coil.CorrelationFactors;
 import org.finstack.coil.Rating;
 import org.finstack.coil.RefrigerantSide;
 import org.finstack.coil.RefrigerantSide.Target;
@@ -25,13 +25,13 @@ import org.finstack.core.Msg;
  * normal, cut at ±4) with sigma from the paper's share of data within its band
  * ({@link NormalCoverage}: e.g. 88.6 % within ±15 % gives sigma = 9.49 %).
  *
- * <p><b>How the factors act (an approximation).</b> The rating has no hook to scale j or f, so
- * (1) the j factor s acts through the capacity's elasticity to the air-side film coefficient,
- * {@code Q_i = Q(inputs_i) s^e}, with {@code e = ln(Q(R) / Q(R + 0.05 / h_o)) / ln(1.05)}
- * found once at the nominal case by adding the air-side fouling resistance 0.05 / h_o (which
- * is the film resistance of a coefficient h_o / 1.05, fins' efficiency change neglected);
- * (2) the f factor scales the core pressure drop, {@code dp_i = dp(inputs_i) s_f} (the friction
- * term of Kays &amp; London's core equation; the small acceleration term is scaled with it).
+ * <p><b>How the factors act.</b> Each sample is rated with its factors as the case's
+ * {@link CorrelationFactors}: the rating model uses {@code j fj} and {@code f ff} wherever it
+ * evaluates the air-side correlation, so the j factor moves the air film coefficient, the fin
+ * efficiency and the wet-coil split as the coil itself responds, and the f factor moves the core
+ * friction term of the Kays &amp; London pressure drop (not its flow-acceleration term). A
+ * factor is held at {@link #MIN_FACTOR} or more (reached only by a scatter far beyond the
+ * published correlations': sigma 0.1 cut at 4 sigma gives 0.6).
  *
  * <p><b>Inputs.</b> Each sample draws entering air temperature, relative humidity (held in 0..1),
  * airflow, saturation temperature and the held superheat or subcooling (not below zero) from
@@ -55,17 +55,19 @@ import org.finstack.core.Msg;
  * @param seed                 the random seed
  * @param sigmaJ               standard deviation of the j factor [-]
  * @param sigmaF               standard deviation of the f factor [-]
- * @param capacityElasticity   e = d ln Q / d ln h_o at the nominal case [-]
  */
 public record UncertaintyBand(double capacityP10, double capacityP50, double capacityP90, double pressureDropP10,
         double pressureDropP50, double pressureDropP90, double nominalCapacity, double nominalPressureDrop,
-        int samples, int failedSamples, long seed, double sigmaJ, double sigmaF, double capacityElasticity) {
+        int samples, int failedSamples, long seed, double sigmaJ, double sigmaF) {
 
     /** Most samples accepted (a bound on run time). */
     public static final int MAX_SAMPLES = 100_000;
 
-    /** Step of the film coefficient used for the elasticity, h_o / (1 + STEP). */
-    static final double STEP = 0.05;
+    /** Smallest j or f factor drawn [-]; a floor of this program that keeps the factors positive. */
+    static final double MIN_FACTOR = 0.05;
+
+    /** Largest standard deviation of a correlation factor accepted [-]. */
+    static final double MAX_SIGMA = 1;
 
     /** Draws beyond this many standard deviations are cut (keeps factors positive). */
     static final double CUT = 4;
@@ -88,6 +90,8 @@ public record UncertaintyBand(double capacityP10, double capacityP50, double cap
     }
 
     /**
+     * The band over the input tolerances and the air-side correlation's published scatter.
+     *
      * @param c          the case (not a required-capacity case)
      * @param tolerances standard uncertainties of the inputs
      * @param samples    number of samples, 3 to {@link #MAX_SAMPLES}
@@ -95,16 +99,36 @@ public record UncertaintyBand(double capacityP10, double capacityP50, double cap
      * @return the band
      */
     public static UncertaintyBand of(CoilCase c, InputTolerances tolerances, int samples, long seed) {
+        AirSideCorrelation corr = AirSideCorrelations.standard("coil.finType", c.coil().finType());
+        return of(c, tolerances, NormalCoverage.sigma(corr.scatterJ(), corr.scatterBand()),
+                NormalCoverage.sigma(corr.scatterF(), corr.scatterBand()), samples, seed);
+    }
+
+    /**
+     * The band with stated standard deviations of the j and f factors in place of the
+     * correlation's published scatter (for a user who trusts the correlation more or less for
+     * this coil, and for tests).
+     *
+     * @param c          the case (not a required-capacity case); its own correlation factors, if
+     *                   any, are the centre the samples' factors multiply
+     * @param tolerances standard uncertainties of the inputs
+     * @param sigmaJ     standard deviation of the j factor [-], 0 to 1
+     * @param sigmaF     standard deviation of the f factor [-], 0 to 1
+     * @param samples    number of samples, 3 to {@link #MAX_SAMPLES}
+     * @param seed       random seed
+     * @return the band
+     */
+    public static UncertaintyBand of(CoilCase c, InputTolerances tolerances, double sigmaJ, double sigmaF, int samples,
+            long seed) {
         Check.within("samples", samples, 3, MAX_SAMPLES);
+        Check.within("sigmaJ", sigmaJ, 0, MAX_SIGMA);
+        Check.within("sigmaF", sigmaF, 0, MAX_SIGMA);
         if (c.refrigerant().target() instanceof Target.Capacity) {
             throw new InputException("refrigerant.requiredCapacity", Msg.IMPOSSIBLE,
                     "fixes the capacity; give a saturation temperature with superheat or subcooling for a capacity band");
         }
         Rating nominal = CoilModels.rate(c);
-        AirSideCorrelation corr = AirSideCorrelations.standard("coil.finType", c.coil().finType());
-        double sigmaJ = NormalCoverage.sigma(corr.scatterJ(), corr.scatterBand());
-        double sigmaF = NormalCoverage.sigma(corr.scatterF(), corr.scatterBand());
-        double e = elasticity(c, nominal);
+        CorrelationFactors centre = c.factors();
         SplittableRandom random = new SplittableRandom(seed);
         double[] q = new double[samples];
         double[] dp = new double[samples];
@@ -114,10 +138,12 @@ public record UncertaintyBand(double capacityP10, double capacityP50, double cap
             for (int k = 0; k < z.length; k++) {
                 z[k] = Math.max(-CUT, Math.min(CUT, random.nextGaussian()));
             }
+            CorrelationFactors drawn = new CorrelationFactors(centre.j() * factor(sigmaJ, z[5]),
+                    centre.f() * factor(sigmaF, z[6]));
             try {
-                Rating r = CoilModels.rate(perturb(c, tolerances, z));
-                q[ok] = r.capacity() * Math.pow(1 + sigmaJ * z[5], e);
-                dp[ok] = r.airPressureDrop() * (1 + sigmaF * z[6]);
+                Rating r = CoilModels.rate(perturb(c, tolerances, z).withFactors(drawn));
+                q[ok] = r.capacity();
+                dp[ok] = r.airPressureDrop();
                 ok++;
             } catch (FinstackException ex) {
                 // a sample outside what the model can rate is counted below and left out
@@ -134,19 +160,12 @@ public record UncertaintyBand(double capacityP10, double capacityP50, double cap
         Arrays.sort(ps);
         return new UncertaintyBand(percentile(qs, 0.1), percentile(qs, 0.5), percentile(qs, 0.9), percentile(ps, 0.1),
                 percentile(ps, 0.5), percentile(ps, 0.9), nominal.capacity(), nominal.airPressureDrop(), samples,
-                samples - ok, seed, sigmaJ, sigmaF, e);
+                samples - ok, seed, sigmaJ, sigmaF);
     }
 
-    /**
-     * d ln Q / d ln h_o by the secant to a film coefficient h_o / 1.05 (as an added air-side
-     * fouling resistance 0.05 / h_o).
-     */
-    static double elasticity(CoilCase c, Rating nominal) {
-        FoulingResistances f = c.fouling();
-        double added = Math.min(0.1, f.airSide() + STEP / nominal.airCoefficient());
-        Rating lower = CoilModels.rate(c.withFouling(new FoulingResistances(added, f.inside(), f.contact())));
-        double ratio = nominal.capacity() / lower.capacity();
-        return Math.log(ratio) / Math.log(1 + STEP);
+    /** 1 + sigma z, held at {@link #MIN_FACTOR} or more. */
+    static double factor(double sigma, double z) {
+        return Math.max(MIN_FACTOR, 1 + sigma * z);
     }
 
     /**
@@ -208,7 +227,7 @@ public record UncertaintyBand(double capacityP10, double capacityP50, double cap
         long t0 = System.nanoTime();
         UncertaintyBand b = of(c, samples, seed);
         double seconds = (System.nanoTime() - t0) / 1e9;
-        int ratings = samples + 2;
+        int ratings = samples + 1;
         return new Timing(b, seconds, ratings / seconds);
     }
 
@@ -217,7 +236,7 @@ public record UncertaintyBand(double capacityP10, double capacityP50, double cap
      *
      * @param band             the band computed
      * @param seconds          wall time [s]
-     * @param ratingsPerSecond ratings (samples plus the nominal and elasticity ratings) per second [1/s]
+     * @param ratingsPerSecond ratings (samples plus the nominal rating) per second [1/s]
      */
     public record Timing(UncertaintyBand band, double seconds, double ratingsPerSecond) {
     }

@@ -5,9 +5,11 @@ import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import static org.assertj.core.api.Assertions.within;
 import static org.finstack.testing.Reference.assertRelative;
 
+import org.finstack.airside.WangChiChang2000PlainFin;
 import org.finstack.coil.AirInlet;
 import org.finstack.coil.CoilCase;
 import org.finstack.coil.CoilModels;
+import org.finstack.coil.CorrelationFactors;
 import org.finstack.coil.Duty;
 import org.finstack.coil.FoulingResistances;
 import org.finstack.coil.Rating;
@@ -17,6 +19,7 @@ import org.finstack.coil.RefrigerantSide.SaturationConvention;
 import org.finstack.coil.RefrigerantSide.Target;
 import org.finstack.core.InputException;
 import org.finstack.study.cost.CleaningPayback;
+import org.finstack.study.uncertainty.NormalCoverage;
 import org.finstack.testing.Coils;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
@@ -103,6 +106,31 @@ class DiagnosisTest {
                 "subcooling");
         assertThat(d.ua().low()).isLessThan(d.ua().value());
         assertThat(d.ua().high()).isGreaterThan(d.ua().value());
+    }
+
+    /**
+     * The budget's j term is the diagnosis done again with j x (1 + sigma_j) on the template
+     * (sigma_j from Wang, Chi &amp; Chang 2000's 88.6 % within ±15 %): a better air film leaves more
+     * of the shortfall to the dirt, and a template's own correlation factors are honoured.
+     */
+    @Test
+    void jScatterTermIsTheDiagnosisWithTheRaisedJ() {
+        double sigmaJ = NormalCoverage.sigma(WangChiChang2000PlainFin.SCATTER_J, WangChiChang2000PlainFin.SCATTER_BAND);
+        Diagnosis raised = Diagnosis.of(condenser(0).withFactors(new CorrelationFactors(1 + sigmaJ, 1)),
+                readings(fouled, condenser(R_KNOWN), 0), null);
+        assertThat(raised.airSideFouling().value()).isGreaterThan(diagnosis.airSideFouling().value());
+        assertRelative(raised.airSideFouling().value() - diagnosis.airSideFouling().value(),
+                diagnosis.foulingBudget().get("airSideCorrelation.j"), 1e-6, "j term of the R_f budget");
+        assertRelative(diagnosis.ua().value(), raised.ua().value(), 0.02, "present UA barely moves with j");
+    }
+
+    /** A fouling just below the search bound is diagnosed (the derivative steps down, not out of the range). */
+    @Test
+    void foulingNearTheSearchBoundIsDiagnosed() {
+        CoilCase dirty = condenser(0.0998);
+        Diagnosis d = Diagnosis.of(condenser(0), readings(CoilModels.rate(dirty), dirty, 0), null);
+        assertThat(d.airSideFouling().value()).isCloseTo(0.0998, within(1e-5));
+        assertThat(d.airSideFouling().high()).isGreaterThan(d.airSideFouling().value());
     }
 
     /**

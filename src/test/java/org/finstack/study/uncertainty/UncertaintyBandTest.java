@@ -6,17 +6,23 @@ import static org.finstack.testing.Reference.assertRelative;
 
 import org.finstack.coil.AirInlet;
 import org.finstack.coil.CoilCase;
+import org.finstack.coil.CoilModels;
+import org.finstack.coil.CorrelationFactors;
 import org.finstack.coil.Duty;
 import org.finstack.coil.FoulingResistances;
 import org.finstack.coil.RefrigerantSide;
+import org.finstack.coil.RefrigerantSide.Model;
+import org.finstack.coil.RefrigerantSide.SaturationConvention;
+import org.finstack.coil.RefrigerantSide.Target;
 import org.finstack.core.InputException;
 import org.finstack.testing.Coils;
 import org.junit.jupiter.api.Test;
 
 /**
- * The Monte Carlo band: reproducible with a seed, wider with larger input tolerances (the
- * same draws), centred on the nominal rating, and its percentile rule (Hyndman &amp; Fan 1996,
- * definition 7, NumPy's default). Small coil, isothermal model and few samples keep it fast.
+ * The Monte Carlo band: reproducible with a seed, wider with larger input tolerances and a
+ * larger correlation scatter (the same draws), bracketing the nominal rating, collapsing onto it
+ * with no scatter, and its percentile rule (Hyndman &amp; Fan 1996,
+ * definition 7, NumPy's default). Small coil, mostly the isothermal model, and few samples keep it fast.
  */
 class UncertaintyBandTest {
 
@@ -50,20 +56,66 @@ class UncertaintyBandTest {
     /**
      * With the correlation's scatter alone the band brackets the nominal rating, and its width
      * follows from sigma_j: the published 88.6 % within ±15 % (Wang, Chi &amp; Chang 2000) gives
-     * sigma 9.49 %; a coil whose capacity elasticity to h_o is e has a capacity band about
-     * 2 x 1.2816 x e x sigma_j wide (checked loosely: 16 samples).
+     * sigma 9.49 %; a coil whose capacity elasticity to j is e (measured here through the
+     * correlation factors, j x 1.05) has a capacity band about 2 x 1.2816 x e x sigma_j wide
+     * (checked loosely: 16 samples).
      */
     @Test
     void correlationScatterAloneBracketsTheNominal() {
-        UncertaintyBand b = UncertaintyBand.of(condenser(), 16, 3);
+        CoilCase c = condenser();
+        UncertaintyBand b = UncertaintyBand.of(c, 16, 3);
         assertThat(b.capacityP10()).isLessThan(b.nominalCapacity());
         assertThat(b.capacityP90()).isGreaterThan(b.nominalCapacity());
         assertThat(b.pressureDropP10()).isLessThan(b.nominalPressureDrop());
         assertThat(b.pressureDropP90()).isGreaterThan(b.nominalPressureDrop());
         assertRelative(0.0949087, b.sigmaJ(), 1e-6, "sigma_j from 88.6 % within 15 %");
-        assertThat(b.capacityElasticity()).isBetween(0.1, 1.0);
-        double expected = 2 * 1.2816 * b.capacityElasticity() * b.sigmaJ();
+        double e = Math.log(CoilModels.rate(c.withFactors(new CorrelationFactors(1.05, 1))).capacity()
+                / b.nominalCapacity()) / Math.log(1.05);
+        assertThat(e).isBetween(0.1, 1.0);
+        double expected = 2 * 1.2816 * e * b.sigmaJ();
         assertThat(b.capacityRelativeWidth()).isBetween(0.5 * expected, 1.5 * expected);
+        assertThat(b.failedSamples()).isZero();
+    }
+
+    /** Zero scatter and exact inputs: every sample is the nominal rating (factors 1 reproduce it exactly). */
+    @Test
+    void zeroScatterCollapsesTheBandOntoTheNominal() {
+        UncertaintyBand b = UncertaintyBand.of(condenser(), InputTolerances.NONE, 0, 0, 5, 11);
+        assertThat(b.capacityP10()).isEqualTo(b.nominalCapacity());
+        assertThat(b.capacityP90()).isEqualTo(b.nominalCapacity());
+        assertThat(b.pressureDropP10()).isEqualTo(b.nominalPressureDrop());
+        assertThat(b.pressureDropP90()).isEqualTo(b.nominalPressureDrop());
+    }
+
+    /** The same draws with a larger sigma: the capacity band widens with sigma_j, the pressure-drop band with sigma_f. */
+    @Test
+    void bandWidensWithTheCorrelationSigma() {
+        CoilCase c = condenser();
+        UncertaintyBand small = UncertaintyBand.of(c, InputTolerances.NONE, 0.05, 0.05, 16, 5);
+        UncertaintyBand mid = UncertaintyBand.of(c, InputTolerances.NONE, 0.10, 0.10, 16, 5);
+        UncertaintyBand large = UncertaintyBand.of(c, InputTolerances.NONE, 0.20, 0.20, 16, 5);
+        assertThat(mid.capacityRelativeWidth()).isGreaterThan(small.capacityRelativeWidth());
+        assertThat(large.capacityRelativeWidth()).isGreaterThan(mid.capacityRelativeWidth());
+        assertThat(mid.pressureDropP90() - mid.pressureDropP10())
+                .isGreaterThan(small.pressureDropP90() - small.pressureDropP10());
+        assertThat(large.pressureDropP90() - large.pressureDropP10())
+                .isGreaterThan(mid.pressureDropP90() - mid.pressureDropP10());
+        // only j moves the capacity: an f-only band has no capacity width
+        UncertaintyBand fOnly = UncertaintyBand.of(c, InputTolerances.NONE, 0, 0.2, 8, 5);
+        assertThat(fOnly.capacityP90()).isEqualTo(fOnly.capacityP10());
+        assertThat(fOnly.pressureDropP90()).isGreaterThan(fOnly.pressureDropP10());
+    }
+
+    /** The zone model with a wet evaporator: the band brackets the nominal rating too. */
+    @Test
+    void zoneModelBandBracketsTheNominal() {
+        RefrigerantSide r = new RefrigerantSide("R134a", Duty.EVAPORATOR, 267.15, SaturationConvention.DEW, 0, 303.15, 0,
+                new Target.Superheat(6), Model.ZONES, 10);
+        CoilCase c = new CoilCase(Coils.exampleCondenser(), new AirInlet(275.15, 0, 0.8, 101_325, 0.85), r,
+                FoulingResistances.NONE);
+        UncertaintyBand b = UncertaintyBand.of(c, 12, 9);
+        assertThat(b.capacityP10()).isLessThan(b.nominalCapacity());
+        assertThat(b.capacityP90()).isGreaterThan(b.nominalCapacity());
         assertThat(b.failedSamples()).isZero();
     }
 
@@ -83,6 +135,8 @@ class UncertaintyBandTest {
                 .hasMessageStartingWith("samples");
         assertThatThrownBy(() -> new InputTolerances(-1, 0, 0, 0, 0)).isInstanceOf(InputException.class)
                 .hasMessageStartingWith("airTemperature");
+        assertThatThrownBy(() -> UncertaintyBand.of(condenser(), InputTolerances.NONE, -0.1, 0, 5, 1))
+                .isInstanceOf(InputException.class).hasMessageStartingWith("sigmaJ");
     }
 
     @Test
