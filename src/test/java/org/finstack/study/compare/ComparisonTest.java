@@ -13,6 +13,7 @@ import org.finstack.io.ProjectFiles;
 import org.finstack.study.Option;
 import org.finstack.study.Overrides;
 import org.finstack.study.Project;
+import org.finstack.study.Constraints.Room;
 import org.finstack.study.fan.FanCurve;
 import org.finstack.study.pressure.DesignPressureCheck;
 import org.finstack.study.pressure.TubePressureRating;
