@@ -245,6 +245,9 @@ final class CompareCommand implements Callable<Integer> {
         row(out, "internal volume", rated, o -> Quantities.format(o.rating().geometry().internalVolume(), Dimension.VOLUME, u));
         row(out, "charge in coil", rated, o -> o.chargeKg().isPresent()
                 ? Quantities.format(o.chargeKg().getAsDouble(), Dimension.MASS, u) : "not computed");
+        row(out, "charge screen", rated, o -> o.charge() == null || o.charge().screening() == null ? "-"
+                : (o.charge().screening().within() ? "within " : "over ")
+                        + Quantities.format(o.charge().screening().governing().maxCharge(), Dimension.MASS, u));
         row(out, "metal mass", rated, o -> Quantities.format(o.rating().geometry().metalMass(), Dimension.MASS, u));
         row(out, "tubes", rated, o -> o.coil().tubeMaterial().id());
         row(out, "fins", rated, o -> o.coil().finMaterial().id() + (o.coil().coating() == null ? ""
