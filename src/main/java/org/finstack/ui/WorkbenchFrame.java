@@ -50,7 +50,6 @@ import javax.swing.Timer;
 import javax.swing.WindowConstants;
 import javax.swing.filechooser.FileNameExtensionFilter;
 import org.finstack.coil.CoilCase;
-import org.finstack.coil.Rating;
 import org.finstack.core.Citation;
 import org.finstack.core.FinstackException;
 import org.finstack.core.InputException;
