@@ -1,22 +1,19 @@
 package org.finstack.cli;
 
-import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
-import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.OptionalDouble;
 import java.util.concurrent.Callable;
 import org.finstack.core.InputException;
-import org.finstack.core.Msg;
 import org.finstack.io.ProjectFiles;
 import org.finstack.study.Project;
+import org.finstack.study.Progress;
+import org.finstack.study.compare.BandSettings;
 import org.finstack.study.compare.Comparison;
 import org.finstack.study.compare.DesignBasis;
 import org.finstack.study.compare.OptionResult;
@@ -31,9 +28,11 @@ import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /**
- * {@code finstack compare PROJECT.json}: rates every coil of a project side by side. An option
- * whose entry in the file is damaged (an impossible coil, a bad value) is reported with its
- * reason and the others still compare.
+ * {@code finstack compare PROJECT.json}: rates every coil of a project side by side, each with
+ * its capacity band (10th to 90th percentile, {@code --samples}, 0 for none, and {@code --seed}).
+ * An option whose entry in the file is damaged (an impossible coil, a bad value) is read as a
+ * damaged entry by {@link ProjectFiles}; it is reported with its reason and the others still
+ * compare. The room for the charge screen comes from the project's {@code constraints.room}.
  */
 @Command(name = "compare", mixinStandardHelpOptions = true,
         description = "Compares the existing coil and the candidates of a project file.")
@@ -57,15 +56,21 @@ final class CompareCommand implements Callable<Integer> {
                     + "(default: the EN 378-2 level for the entering air, from memory)")
     private String designTemperature;
 
-    /** A project as read, with the entries that could not be read. */
-    record Loaded(Project project, List<OptionResult> unreadable) {
-    }
+    @Option(names = "--samples", paramLabel = "N", defaultValue = "" + BandSettings.DEFAULT_SAMPLES,
+            description = "Monte Carlo samples of each option's capacity band (10th to 90th percentile over the "
+                    + "air-side correlation's published scatter); 0 = no band (default: ${DEFAULT-VALUE})")
+    private int samples;
+
+    @Option(names = "--seed", paramLabel = "SEED", defaultValue = "" + BandSettings.DEFAULT_SEED,
+            description = "random seed of the capacity bands (default: ${DEFAULT-VALUE})")
+    private long seed;
 
     @Override
     public Integer call() throws Exception {
         UnitSystem system = Output.system(units);
-        Loaded l = load(projectFile);
-        Comparison c = Comparison.of(l.project(), basis(l.project(), designTemperature)).withUnreadable(l.unreadable());
+        Project project = ProjectFiles.read(projectFile);
+        Comparison c = Comparison.of(project, basis(project, designTemperature), band(samples, seed),
+                Progress.NONE);
         PrintWriter out = spec.commandLine().getOut();
         if (json) {
             ObjectNode root = Output.envelope("compare", projectFile);
@@ -86,79 +91,16 @@ final class CompareCommand implements Callable<Integer> {
     }
 
     /**
-     * Reads a project file; entries of {@code existing} or {@code options} that cannot be read are
-     * set aside with their reasons, so the rest can still be compared.
+     * @param samples the {@code --samples} value
+     * @param seed    the {@code --seed} value
+     * @return the band settings, a bad count refused naming {@code --samples}
      */
-    static Loaded load(Path file) {
-        String text = org.finstack.io.TextFiles.read(file);
-        String origin = file.getFileName().toString();
+    static BandSettings band(int samples, long seed) {
         try {
-            return new Loaded(ProjectFiles.parse(text, origin), List.of());
-        } catch (InputException first) {
-            String f = first.field();
-            if (!f.startsWith("options[") && !f.startsWith("existing")) {
-                throw first;
-            }
-            JsonNode root;
-            try {
-                root = new ObjectMapper().readTree(text);
-            } catch (IOException e) {
-                throw first;
-            }
-            ObjectNode pruned = ((ObjectNode) root).deepCopy();
-            List<OptionResult> bad = new ArrayList<>();
-            int place = 0;
-            if (root.has("existing")) {
-                String err = entryError(root, root.get("existing"), true, "existing");
-                if (err != null) {
-                    bad.add(OptionResult.failed(place, name(root.get("existing"), "existing"), true, err));
-                    pruned.remove("existing");
-                }
-                place++;
-            }
-            ArrayNode kept = JsonNodeFactory.instance.arrayNode();
-            JsonNode list = root.path("options");
-            for (int i = 0; i < list.size(); i++) {
-                String path = "options[" + i + "]";
-                String err = entryError(root, list.get(i), false, path);
-                if (err != null) {
-                    bad.add(OptionResult.failed(place, name(list.get(i), path), false, err));
-                } else {
-                    kept.add(list.get(i));
-                }
-                place++;
-            }
-            if (bad.isEmpty() || (!pruned.has("existing") && kept.isEmpty())) {
-                throw first;
-            }
-            pruned.set("options", kept);
-            return new Loaded(ProjectFiles.parse(pruned.toString(), origin), bad);
-        }
-    }
-
-    private static String entryError(JsonNode root, JsonNode entry, boolean existing, String path) {
-        ObjectNode mini = JsonNodeFactory.instance.objectNode();
-        mini.set("version", root.path("version"));
-        mini.put("name", "check");
-        mini.set("conditions", root.path("conditions"));
-        if (existing) {
-            mini.set("existing", entry);
-        } else {
-            mini.putArray("options").add(entry);
-        }
-        try {
-            ProjectFiles.parse(mini.toString(), "check");
-            return null;
+            return new BandSettings(samples, seed);
         } catch (InputException e) {
-            String inMini = existing ? "existing" : "options[0]";
-            return e.field().startsWith(inMini) ? path + e.field().substring(inMini.length()) + ": "
-                    + e.msg().format(e.args()) : e.getMessage();
+            throw new InputException("--samples", e.msg(), e.args());
         }
-    }
-
-    private static String name(JsonNode entry, String fallback) {
-        JsonNode n = entry == null ? null : entry.get("name");
-        return n != null && n.isTextual() ? n.asText() : fallback;
     }
 
     static ObjectNode json(Comparison c) {
@@ -181,6 +123,18 @@ final class CompareCommand implements Callable<Integer> {
             n.put("model", r.model());
             n.put("capacity_W", r.capacity());
             put(n, "capacityRatio", o.capacityRatio());
+            put(n, "capacityP10_W", o.capacityP10());
+            put(n, "capacityP90_W", o.capacityP90());
+            if (o.band() != null) {
+                ObjectNode b = n.putObject("capacityBand");
+                b.put("p10_W", o.band().capacityP10());
+                b.put("p50_W", o.band().capacityP50());
+                b.put("p90_W", o.band().capacityP90());
+                b.put("samples", o.band().samples());
+                b.put("failedSamples", o.band().failedSamples());
+                b.put("seed", o.band().seed());
+                b.put("basis", "stated airflow; air-side correlation's published scatter");
+            }
             n.put("sensible_W", r.moisture().sensibleCapacity());
             n.put("latent_W", r.moisture().latentCapacity());
             n.put("airOutletTemperature_C", r.airOutletTemperature() - 273.15);
@@ -257,6 +211,12 @@ final class CompareCommand implements Callable<Integer> {
         row(out, "capacity", rated, o -> Quantities.format(o.rating().capacity(), Dimension.HEAT_FLOW, u));
         row(out, "vs existing", rated, o -> o.capacityRatio().isPresent()
                 ? String.format(Locale.ROOT, "%.3f", o.capacityRatio().getAsDouble()) : "-");
+        if (c.withBand()) {
+            row(out, "capacity p10", rated, o -> o.band() == null ? "-"
+                    : Quantities.format(o.band().capacityP10(), Dimension.HEAT_FLOW, u));
+            row(out, "capacity p90", rated, o -> o.band() == null ? "-"
+                    : Quantities.format(o.band().capacityP90(), Dimension.HEAT_FLOW, u));
+        }
         row(out, "sensible", rated, o -> Quantities.format(o.rating().moisture().sensibleCapacity(), Dimension.HEAT_FLOW, u));
         row(out, "latent", rated, o -> Quantities.format(o.rating().moisture().latentCapacity(), Dimension.HEAT_FLOW, u));
         row(out, "air out", rated, o -> Quantities.format(o.rating().airOutletTemperature(), Dimension.TEMPERATURE, u));
@@ -280,6 +240,9 @@ final class CompareCommand implements Callable<Integer> {
         row(out, "internal volume", rated, o -> Quantities.format(o.rating().geometry().internalVolume(), Dimension.VOLUME, u));
         row(out, "charge in coil", rated, o -> o.chargeKg().isPresent()
                 ? Quantities.format(o.chargeKg().getAsDouble(), Dimension.MASS, u) : "not computed");
+        row(out, "charge screen", rated, o -> o.charge() == null || o.charge().screening() == null ? "-"
+                : (o.charge().screening().within() ? "within " : "over ")
+                        + Quantities.format(o.charge().screening().governing().maxCharge(), Dimension.MASS, u));
         row(out, "metal mass", rated, o -> Quantities.format(o.rating().geometry().metalMass(), Dimension.MASS, u));
         row(out, "tubes", rated, o -> o.coil().tubeMaterial().id());
         row(out, "fins", rated, o -> o.coil().finMaterial().id() + (o.coil().coating() == null ? ""
@@ -290,6 +253,12 @@ final class CompareCommand implements Callable<Integer> {
         out.println("    (tubes' allowable pressure over the saturation pressure at "
                 + Quantities.format(c.basis().designTemperature(), Dimension.TEMPERATURE, u) + " less ambient; "
                 + c.basis().description() + ")");
+        if (c.withBand()) {
+            OptionResult any = c.options().stream().filter(o -> o.band() != null).findFirst().orElseThrow();
+            out.println("    (capacity band: 10th to 90th percentile at the stated airflow over the air-side "
+                    + "correlation's published scatter, " + any.band().samples() + " samples, seed "
+                    + any.band().seed() + ")");
+        }
         out.println();
         out.println(Explanation.recommendation(c));
         for (OptionResult o : c.options()) {

@@ -8,6 +8,10 @@ import org.finstack.core.Msg;
 import org.finstack.report.HtmlReport;
 import org.finstack.report.PdfReport;
 import org.finstack.report.Summary;
+import org.finstack.io.ProjectFiles;
+import org.finstack.study.Progress;
+import org.finstack.study.Project;
+import org.finstack.study.compare.BandSettings;
 import org.finstack.study.compare.Comparison;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
@@ -15,7 +19,10 @@ import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
-/** {@code finstack report PROJECT.json --out report.pdf [--html report.html]}: the one-page summary. */
+/**
+ * {@code finstack report PROJECT.json --out report.pdf [--html report.html]}: the one-page summary,
+ * with each option's capacity band in the table ({@code --samples}, 0 for none) when it fits.
+ */
 @Command(name = "report", mixinStandardHelpOptions = true,
         description = "Writes the one-page summary of a project's comparison as PDF and/or HTML.")
 final class ReportCommand implements Callable<Integer> {
@@ -40,15 +47,24 @@ final class ReportCommand implements Callable<Integer> {
             description = "highest expected saturation temperature for the design-pressure margin, e.g. \"60 C\"")
     private String designTemperature;
 
+    @Option(names = "--samples", paramLabel = "N", defaultValue = "" + BandSettings.DEFAULT_SAMPLES,
+            description = "Monte Carlo samples of each option's capacity band shown in the table; 0 = no band "
+                    + "(default: ${DEFAULT-VALUE})")
+    private int samples;
+
+    @Option(names = "--seed", paramLabel = "SEED", defaultValue = "" + BandSettings.DEFAULT_SEED,
+            description = "random seed of the capacity bands (default: ${DEFAULT-VALUE})")
+    private long seed;
+
     @Override
     public Integer call() {
         if (pdf == null && html == null) {
             throw new InputException("--out", Msg.EITHER_REQUIRED, "--out FILE.pdf", "--html FILE.html");
         }
         var system = Output.system(units);
-        CompareCommand.Loaded l = CompareCommand.load(projectFile);
-        Comparison c = Comparison.of(l.project(), CompareCommand.basis(l.project(), designTemperature))
-                .withUnreadable(l.unreadable());
+        Project project = ProjectFiles.read(projectFile);
+        Comparison c = Comparison.of(project, CompareCommand.basis(project, designTemperature),
+                CompareCommand.band(samples, seed), Progress.NONE);
         Summary s = Summary.of(c, system);
         PrintWriter out = spec.commandLine().getOut();
         if (pdf != null) {

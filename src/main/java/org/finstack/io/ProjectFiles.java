@@ -1,19 +1,25 @@
 package org.finstack.io;
 
+import com.fasterxml.jackson.core.JsonFactory;
+import com.fasterxml.jackson.core.JsonParser;
 import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.core.JsonToken;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
+import com.fasterxml.jackson.databind.util.RawValue;
 import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.math.BigDecimal;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Set;
 import org.finstack.coil.AirInlet;
 import org.finstack.coil.FoulingResistances;
@@ -31,21 +37,40 @@ import org.finstack.units.Quantities;
 import org.finstack.units.UnitSystem;
 
 /**
- * Reads and writes project files (format version 1; the refrigerant object carries the case
- * file's version-2 keys when the conditions use them):
+ * Reads and writes project files (format version 2; version 1, which lacks
+ * {@code constraints.room}, is read as it is; the refrigerant object carries the case file's
+ * version-2 keys when the conditions use them):
  * <pre>
- * { "version": 1, "name": ..., "conditions": { "air": {...}, "refrigerant": {...}, "fouling": {...} },
+ * { "version": 2, "name": ..., "conditions": { "air": {...}, "refrigerant": {...}, "fouling": {...} },
  *   "existing": OPTION, "options": [ OPTION, ... ],
  *   "constraints": { "maxFaceWidth", "maxFaceHeight", "maxDepth", "circuits", "requiredCapacity",
- *                    "fanCurve": [ { "volumeFlow": ..., "pressure": ... } ] },
+ *                    "fanCurve": [ { "volumeFlow": ..., "pressure": ... } ],
+ *                    "room": { "volume": "60 m3", "floorArea": "25 m2", "releaseHeight": "1.8 m",
+ *                              "selfContainedAppliance": false } },
  *   "notes": "..." }
  * OPTION = { "name": ..., "coil": {...}, "overrides": { any of "air", "refrigerant", "fouling" } }
  * </pre>
  * The {@code coil}, {@code air}, {@code refrigerant} and {@code fouling} objects are exactly those
  * of a case file ({@link CaseFiles}), so parts of any case file can be pasted in. Quantities are
  * read as "number unit" strings or bare SI numbers and written as "number unit" strings in SI
- * units ({@link #quantity}), so a saved project reads back unchanged. Saving is
- * atomic and keeps the previous file as {@code NAME.bak} ({@link AtomicFiles}).
+ * units ({@link #quantity}), so a saved project reads back unchanged.
+ *
+ * <p><b>The room</b> ({@code constraints.room}, optional) is the smallest occupied room a leak of
+ * the refrigerant can reach, for the EN 378-1 charge screen of a comparison: its volume, floor
+ * area, the release height of the unit above the floor (quantities with units like every other
+ * key) and whether the system is a self-contained appliance under IEC 60335-2-89 ({@code true} or
+ * {@code false}); all four are required when the room is given. A file with a room is written as
+ * version 2; a file without one keeps the version it was read with.
+ *
+ * <p><b>Damaged entries.</b> The existing coil and each option are read on their own: an entry
+ * with a bad value (an impossible coil, a misspelt key, a value without its unit) does not refuse
+ * the file but is kept as a {@link Project.Damaged} entry with its error (field and reason) and
+ * its original JSON text, and the other options are read. Saving writes a damaged entry back
+ * verbatim, at its place, so a file is never lost by opening and saving it. Everything outside the
+ * entries (version, name, conditions, constraints, notes) refuses the file when bad, and so does a
+ * file in which no entry at all could be read (with the first entry's error).
+ *
+ * <p>Saving is atomic and keeps the previous file as {@code NAME.bak} ({@link AtomicFiles}).
  */
 public final class ProjectFiles {
 
@@ -60,9 +85,11 @@ public final class ProjectFiles {
     private static final Set<String> CONDITIONS = Set.of("air", "refrigerant", "fouling");
     private static final Set<String> OPTION = Set.of("name", "coil", "overrides");
     private static final Set<String> CONSTRAINTS = Set.of("maxFaceWidth", "maxFaceHeight", "maxDepth", "circuits",
-            "requiredCapacity", "fanCurve");
+            "requiredCapacity", "fanCurve", "room");
     private static final Set<String> FAN_POINT = Set.of("volumeFlow", "pressure");
+    private static final Set<String> ROOM = Set.of("volume", "floorArea", "releaseHeight", "selfContainedAppliance");
 
+    private static final JsonFactory FACTORY = new JsonFactory();
     private static final ObjectMapper WRITER = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
 
     private ProjectFiles() {
@@ -104,7 +131,18 @@ public final class ProjectFiles {
         Conditions conditions = new Conditions(CaseFiles.air(cond.object("air", true)),
                 CaseFiles.refrigerant(cond.object("refrigerant", true)),
                 CaseFiles.fouling(cond.object("fouling", false)));
-        Option existing = top.has("existing") ? option(top.object("existing", true)) : null;
+        Map<String, String> raw = entryTexts(json);
+        Option existing = null;
+        List<Project.Damaged> damaged = new ArrayList<>();
+        List<InputException> errors = new ArrayList<>();
+        if (top.has("existing")) {
+            try {
+                existing = option(top.object("existing", true));
+            } catch (InputException e) {
+                errors.add(e);
+                damaged.add(damaged("existing", -1, root.get("existing"), e, raw));
+            }
+        }
         List<Option> options = new ArrayList<>();
         if (top.has("options")) {
             JsonNode list = root.get("options");
@@ -112,14 +150,72 @@ public final class ProjectFiles {
                 throw new InputException("options", Msg.IMPOSSIBLE, "must be a JSON list [ ... ]");
             }
             for (int i = 0; i < list.size(); i++) {
-                options.add(option(new JsonFields(list.get(i), "options[" + i + "]")));
+                String field = "options[" + i + "]";
+                try {
+                    options.add(option(new JsonFields(list.get(i), field)));
+                } catch (InputException e) {
+                    errors.add(e);
+                    damaged.add(damaged(field, i, list.get(i), e, raw));
+                }
             }
         }
         if (existing == null && options.isEmpty()) {
+            if (!errors.isEmpty()) {
+                throw errors.get(0);
+            }
             throw new InputException("options", Msg.EITHER_REQUIRED, "an existing coil", "at least one option");
         }
         return new Project(version, top.text("name", origin), conditions, existing, options,
-                constraints(top.object("constraints", false), root.get("constraints")), top.text("notes", ""));
+                constraints(top.object("constraints", false), root.get("constraints")), top.text("notes", ""),
+                damaged);
+    }
+
+    private static Project.Damaged damaged(String field, int slot, JsonNode entry, InputException e,
+            Map<String, String> raw) {
+        JsonNode n = entry == null || !entry.isObject() ? null : entry.get("name");
+        String name = n != null && n.isTextual() ? n.asText() : field;
+        String text = raw.get(field);
+        return new Project.Damaged(field, slot, name, e.getMessage(), text != null ? text : String.valueOf(entry));
+    }
+
+    /**
+     * The original text of the top-level {@code existing} value and of each element of the
+     * top-level {@code options} list, keyed {@code existing} and {@code options[i]}, sliced from
+     * the file by the parser's character offsets (called only on text that parsed as a JSON
+     * object, so it cannot fail on syntax).
+     */
+    private static Map<String, String> entryTexts(String json) {
+        Map<String, String> out = new HashMap<>();
+        try (JsonParser p = FACTORY.createParser(json)) {
+            if (p.nextToken() != JsonToken.START_OBJECT) {
+                return out;
+            }
+            while (p.nextToken() == JsonToken.FIELD_NAME) {
+                String key = p.currentName();
+                JsonToken value = p.nextToken();
+                if ("existing".equals(key)) {
+                    out.put(key, slice(json, p));
+                } else if ("options".equals(key) && value == JsonToken.START_ARRAY) {
+                    int i = 0;
+                    while (p.nextToken() != JsonToken.END_ARRAY) {
+                        out.put("options[" + i++ + "]", slice(json, p));
+                    }
+                } else {
+                    p.skipChildren();
+                }
+            }
+        } catch (IOException e) {
+            throw new UncheckedIOException("cannot re-read text that parsed a moment ago", e);
+        }
+        return out;
+    }
+
+    /** The text of the value whose first token the parser is on, leaving the parser on its last token. */
+    private static String slice(String json, JsonParser p) throws IOException {
+        int start = (int) p.currentTokenLocation().getCharOffset();
+        p.skipChildren();
+        int end = (int) p.currentLocation().getCharOffset();
+        return json.substring(start, end);
     }
 
     private static Option option(JsonFields o) {
@@ -154,10 +250,27 @@ public final class ProjectFiles {
                         p.quantity("pressure", Dimension.PRESSURE_DIFFERENCE))));
             }
         }
+        Constraints.Room room = c.has("room") ? room(c.object("room", true), raw.get("room")) : null;
         return c.build(() -> new Constraints(c.quantity("maxFaceWidth", Dimension.LENGTH, 0),
                 c.quantity("maxFaceHeight", Dimension.LENGTH, 0), c.quantity("maxDepth", Dimension.LENGTH, 0),
                 c.has("circuits") ? c.count("circuits") : 0, c.quantity("requiredCapacity", Dimension.HEAT_FLOW, 0),
-                curve));
+                curve, room));
+    }
+
+    private static Constraints.Room room(JsonFields r, JsonNode raw) {
+        r.onlyKeys(ROOM);
+        double volume = r.quantity("volume", Dimension.VOLUME);
+        double floor = r.quantity("floorArea", Dimension.AREA);
+        double height = r.quantity("releaseHeight", Dimension.LENGTH);
+        String field = r.field("selfContainedAppliance");
+        JsonNode sc = raw.get("selfContainedAppliance");
+        if (sc == null || sc.isNull()) {
+            throw new InputException(field, Msg.MISSING);
+        }
+        if (!sc.isBoolean()) {
+            throw new InputException(field, Msg.IMPOSSIBLE, "must be true or false, got " + sc);
+        }
+        return r.build(() -> new Constraints.Room(volume, floor, height, sc.asBoolean()));
     }
 
     /**
@@ -181,18 +294,27 @@ public final class ProjectFiles {
      */
     public static String toJson(Project project) {
         ObjectNode root = JsonNodeFactory.instance.objectNode();
-        root.put("version", VERSION);
+        root.put("version", versionFor(project));
         root.put("name", project.name());
         ObjectNode cond = root.putObject("conditions");
         Conditions c = project.conditions();
         cond.set("air", air(c.air()));
         cond.set("refrigerant", refrigerant(c.refrigerant()));
         cond.set("fouling", fouling(c.fouling()));
-        if (project.existing() != null) {
-            root.set("existing", option(project.existing()));
+        List<Option> all = project.allOptions();
+        ArrayNode options = JsonNodeFactory.instance.arrayNode();
+        for (Project.Entry e : project.entries()) {
+            if (e.readable() && project.isExisting(e.option())) {
+                root.set("existing", option(all.get(e.option())));
+            } else if (e.readable()) {
+                options.add(option(all.get(e.option())));
+            } else if (e.damaged().existing()) {
+                root.putRawValue("existing", new RawValue(e.damaged().json()));
+            } else {
+                options.addRawValue(new RawValue(e.damaged().json()));
+            }
         }
-        ArrayNode options = root.putArray("options");
-        project.options().forEach(o -> options.add(option(o)));
+        root.set("options", options);
         Constraints k = project.constraints();
         if (!k.equals(Constraints.NONE)) {
             ObjectNode kn = root.putObject("constraints");
@@ -210,6 +332,13 @@ public final class ProjectFiles {
                             .put("pressure", quantity(p.pressure(), Dimension.PRESSURE_DIFFERENCE));
                 }
             }
+            Constraints.Room room = k.room();
+            if (room != null) {
+                kn.putObject("room").put("volume", quantity(room.volume(), Dimension.VOLUME))
+                        .put("floorArea", quantity(room.floorArea(), Dimension.AREA))
+                        .put("releaseHeight", quantity(room.releaseHeight(), Dimension.LENGTH))
+                        .put("selfContainedAppliance", room.selfContainedAppliance());
+            }
         }
         root.put("notes", project.notes());
         try {
@@ -217,6 +346,16 @@ public final class ProjectFiles {
         } catch (JsonProcessingException e) {
             throw new UncheckedIOException(e);
         }
+    }
+
+    /**
+     * @param project a project
+     * @return the format version to write it in: 2 when it uses a version-2 key (a room), else the
+     *         version it was read with, so a version-1 file stays readable by older copies
+     */
+    static int versionFor(Project project) {
+        int needed = project.constraints().room() != null ? 2 : 1;
+        return Math.min(VERSION, Math.max(project.version(), needed));
     }
 
     private static void putIfSet(ObjectNode n, String key, double v, Dimension d) {

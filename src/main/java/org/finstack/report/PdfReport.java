@@ -22,6 +22,8 @@ import org.finstack.io.AtomicFiles;
  * Lays a {@link Summary} out on one A4 page with PDFBox. Text is set in Helvetica; sections that
  * would run off the page are set smaller, step by step, until the whole summary fits on the one
  * page (down to {@link #MIN_SCALE}); below that the methods' references are cut to one line each.
+ * When the table carries the capacity band and the page still overflows, the band's column is left
+ * out (the HTML page keeps it).
  */
 public final class PdfReport {
 
@@ -54,6 +56,23 @@ public final class PdfReport {
      * @return the one-page PDF
      */
     public static byte[] bytes(Summary s) {
+        if (s.hasBand()) {
+            byte[] pdf = fitted(s);
+            return pdf != null ? pdf : fittedOrFail(s.withoutBand());
+        }
+        return fittedOrFail(s);
+    }
+
+    private static byte[] fittedOrFail(Summary s) {
+        byte[] pdf = fitted(s);
+        if (pdf == null) {
+            throw new IllegalStateException("the summary does not fit on one page even at the smallest text");
+        }
+        return pdf;
+    }
+
+    /** @return the one-page PDF, or null when the summary does not fit even with shortened references */
+    private static byte[] fitted(Summary s) {
         byte[] chart = CapacityChart.png(s.chart(), 1400, 520);
         for (double scale = 1.0; scale >= MIN_SCALE - 1e-9; scale -= 0.05) {
             byte[] pdf = render(s, chart, scale, false);
@@ -61,11 +80,7 @@ public final class PdfReport {
                 return pdf;
             }
         }
-        byte[] pdf = render(s, chart, MIN_SCALE, true);
-        if (pdf == null) {
-            throw new IllegalStateException("the summary does not fit on one page even at the smallest text");
-        }
-        return pdf;
+        return render(s, chart, MIN_SCALE, true);
     }
 
     /** @return the PDF, or null when the content ran off the page */
@@ -125,6 +140,11 @@ public final class PdfReport {
         private static final PDType1Font REGULAR = new PDType1Font(Standard14Fonts.FontName.HELVETICA);
         private static final PDType1Font BOLD = new PDType1Font(Standard14Fonts.FontName.HELVETICA_BOLD);
         private static final Map<Character, Boolean> ENCODABLE = new HashMap<>();
+
+        /** Relative widths of the table's columns by their heads (1 when not listed). */
+        private static final Map<String, Float> WEIGHTS = Map.of("#", 0.4f, "Option", 2.6f, "Capacity", 1.2f,
+                Summary.BAND, 1.7f, "vs existing", 0.9f, "Air dp", 0.9f, "Airflow (fan)", 1.1f, "Capacity on fan",
+                1.1f, "Pressure margin", 1.3f);
 
         private final PDPageContentStream cs;
         private final float left;
@@ -194,14 +214,14 @@ public final class PdfReport {
 
         void table(List<String> header, List<List<String>> rows, float size) throws IOException {
             float fs = size * scale;
-            float[] weights = {0.4f, 2.6f, 1.3f, 0.9f, 0.9f, 1.1f, 1.1f, 1.0f, 0.9f, 0.9f, 1.3f};
-            float total = 0;
-            for (float f : weights) {
-                total += f;
-            }
             float[] widths = new float[header.size()];
+            float total = 0;
             for (int i = 0; i < widths.length; i++) {
-                widths[i] = width * weights[Math.min(i, weights.length - 1)] / total;
+                widths[i] = WEIGHTS.getOrDefault(header.get(i), 1.0f);
+                total += widths[i];
+            }
+            for (int i = 0; i < widths.length; i++) {
+                widths[i] = width * widths[i] / total;
             }
             row(header, widths, BOLD, fs);
             rule(0.8f);

@@ -40,6 +40,12 @@ public record Summary(String title, String question, String recommendation, List
         List<List<String>> rows, ChartData chart, List<String> tradeOffs, List<String> assumptions,
         List<String> methods, List<String> cautions, String disclaimer) {
 
+    /** Head of the capacity-band column. */
+    static final String BAND = "Capacity p10 - p90";
+
+    /** Start of the assumption that explains the band. */
+    static final String BAND_NOTE = "Capacity band:";
+
     /** Freezes the lists. */
     public Summary {
         header = List.copyOf(header);
@@ -86,9 +92,13 @@ public record Summary(String title, String question, String recommendation, List
         String question = existingName == null
                 ? "Which of " + p.options().size() + " candidate coils should be installed?"
                 : "Which coil should replace " + existingName + ", and what does each candidate change?";
-        List<String> header = List.of("#", "Option", "Capacity", "vs existing", "Air dp", fan ? "Airflow (fan)"
-                : "Airflow", fan ? "Capacity on fan" : "Capacity", "Refr. dp", "Charge", "Metal mass",
-                "Pressure margin");
+        boolean band = c.withBand();
+        List<String> header = new ArrayList<>(List.of("#", "Option", "Capacity"));
+        if (band) {
+            header.add(BAND);
+        }
+        header.addAll(List.of("vs existing", "Air dp", fan ? "Airflow (fan)" : "Airflow",
+                fan ? "Capacity on fan" : "Capacity", "Refr. dp", "Charge", "Metal mass", "Pressure margin"));
         List<List<String>> rows = new ArrayList<>();
         List<String> labels = new ArrayList<>();
         List<Double> cap = new ArrayList<>();
@@ -99,11 +109,20 @@ public record Summary(String title, String question, String recommendation, List
             String label = "#" + (o.index() + 1);
             String name = o.name() + (o.existing() ? " (existing)" : "");
             if (!o.rated()) {
-                rows.add(List.of(label, name, "not rated: " + o.error(), "", "", "", "", "", "", "", ""));
+                List<String> failed = new ArrayList<>(List.of(label, name, "not rated: " + o.error()));
+                while (failed.size() < header.size()) {
+                    failed.add("");
+                }
+                rows.add(failed);
                 continue;
             }
-            rows.add(List.of(label, name, Format.q(o.rating().capacity(), Dimension.HEAT_FLOW, units),
-                    o.capacityRatio().isPresent() ? Format.ratio(o.capacityRatio().getAsDouble()) : "-",
+            List<String> row = new ArrayList<>(List.of(label, name,
+                    Format.q(o.rating().capacity(), Dimension.HEAT_FLOW, units)));
+            if (band) {
+                row.add(o.band() == null ? "-" : Format.q(o.band().capacityP10(), Dimension.HEAT_FLOW, units) + " - "
+                        + Format.q(o.band().capacityP90(), Dimension.HEAT_FLOW, units));
+            }
+            row.addAll(List.of(o.capacityRatio().isPresent() ? Format.ratio(o.capacityRatio().getAsDouble()) : "-",
                     Format.q(o.deliveredAirPressureDrop(), Dimension.PRESSURE_DIFFERENCE, units),
                     Format.q(o.airflow(), Dimension.VOLUME_FLOW, units),
                     fan && (o.fan() == null || !o.fan().found()) ? "no fan point"
@@ -117,6 +136,7 @@ public record Summary(String title, String question, String recommendation, List
                     o.pressureMargin().isPresent() ? Format.ratio(o.pressureMargin().getAsDouble()) + " "
                             + o.pressure().margin().verdict().name().toLowerCase(Locale.ROOT).replace('_', ' ')
                             : "unknown"));
+            rows.add(row);
             labels.add(label);
             cap.add(Quantities.toUnit(o.deliveredCapacity(), Dimension.HEAT_FLOW, capUnit));
             dp.add(Quantities.toUnit(o.deliveredAirPressureDrop(), Dimension.PRESSURE_DIFFERENCE, dpUnit));
@@ -127,6 +147,32 @@ public record Summary(String title, String question, String recommendation, List
         return new Summary(p.name(), question, Explanation.recommendation(c), header, rows,
                 new ChartData(labels, cap, capUnit, dp, dpUnit), trade, assumptions(c, units), methods(c),
                 cautions(c), Cautions.GOVERNING);
+    }
+
+    /** @return whether the table has the capacity-band column */
+    public boolean hasBand() {
+        return header.contains(BAND);
+    }
+
+    /**
+     * @return this summary without the capacity-band column and its assumption (for a page the
+     *         band does not fit on)
+     */
+    public Summary withoutBand() {
+        int k = header.indexOf(BAND);
+        if (k < 0) {
+            return this;
+        }
+        List<String> h = new ArrayList<>(header);
+        h.remove(k);
+        List<List<String>> r = new ArrayList<>();
+        for (List<String> row : rows) {
+            List<String> copy = new ArrayList<>(row);
+            copy.remove(k);
+            r.add(copy);
+        }
+        List<String> a = assumptions.stream().filter(x -> !x.startsWith(BAND_NOTE)).toList();
+        return new Summary(title, question, recommendation, h, r, chart, tradeOffs, a, methods, cautions, disclaimer);
     }
 
     private static String firstName(OptionResult o) {
@@ -158,6 +204,10 @@ public record Summary(String title, String question, String recommendation, List
         out.add("Charge: refrigerant held in the coil's tubes only; the system holds more.");
         c.options().stream().filter(o -> o.charge() != null).flatMap(o -> o.charge().notes().stream()).distinct()
                 .forEach(out::add);
+        c.options().stream().filter(o -> o.band() != null).findFirst().ifPresent(o -> out.add(BAND_NOTE
+                + " 10th to 90th percentile of capacity at the stated airflow, a seeded Monte Carlo over the air-side "
+                + "correlation's published scatter (" + o.band().samples() + " samples, seed " + o.band().seed()
+                + "); the inputs are taken as exact."));
         out.add("Each option is rated alone with the same model and conditions a single rating uses.");
         return out;
     }

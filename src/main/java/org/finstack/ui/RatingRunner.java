@@ -14,12 +14,17 @@ import org.finstack.coil.Rating;
 import org.finstack.core.FinstackException;
 import org.finstack.fluid.Fluids;
 import org.finstack.study.Cautions;
+import org.finstack.study.Progress;
 import org.finstack.study.Project;
+import org.finstack.study.compare.BandSettings;
+import org.finstack.study.compare.Comparison;
+import org.finstack.study.compare.DesignBasis;
 
 /**
  * Rates every option of a project in a {@link SwingWorker}, never on the event thread, each with
- * the model its refrigerant side names ({@link CoilModels#rate}), reporting progress and honouring
- * Cancel between options. The cautions for each option's refrigerant are gathered there too (the
+ * the model its refrigerant side names ({@link CoilModels#rate}), hands the ratings over at once,
+ * then compares the options ({@link Comparison}, with the capacity bands when they are on) in the
+ * same worker, reporting progress and honouring Cancel between options. The cautions for each option's refrigerant are gathered there too (the
  * fluid's safety class comes from its data file). A newer request supersedes an older one, whose
  * results are dropped. It counts the ratings it ran and notes any that ran on the event thread,
  * so a test can check the rule.
@@ -49,7 +54,8 @@ final class RatingRunner {
     private final Listener listener;
     private final AtomicInteger ratings = new AtomicInteger();
     private final AtomicInteger ratingsOnEdt = new AtomicInteger();
-    private SwingWorker<List<Outcome>, Void> current;
+    private final AtomicInteger comparisons = new AtomicInteger();
+    private SwingWorker<Comparison, List<Outcome>> current;
     private int generation;
     private boolean pending;
 
@@ -73,19 +79,24 @@ final class RatingRunner {
     }
 
     /**
-     * Rates every option of a project.
+     * Rates every option of a project, then compares them.
      *
-     * @param project the project
-     * @param done    receives one outcome per option, on the event thread (not after Cancel)
+     * @param project  the project
+     * @param band     whether and how to rate each option's capacity band in the comparison
+     * @param rated    receives one outcome per option as soon as they are rated, on the event
+     *                 thread (not after Cancel or a newer request)
+     * @param compared receives the full comparison ({@link Comparison}: fan point, pressure
+     *                 margin, charge screen, capacity bands) when it is done, on the event thread
      */
-    void rate(Project project, Consumer<List<Outcome>> done) {
+    void rate(Project project, BandSettings band, Consumer<List<Outcome>> rated, Consumer<Comparison> compared) {
         cancel();
         int mine = ++generation;
-        SwingWorker<List<Outcome>, Void> w = new SwingWorker<>() {
+        SwingWorker<Comparison, List<Outcome>> w = new SwingWorker<>() {
             @Override
-            protected List<Outcome> doInBackground() {
+            protected Comparison doInBackground() {
                 List<Outcome> out = new ArrayList<>();
                 int n = project.allOptions().size();
+                int share = band.on() ? 20 : 50;
                 for (int i = 0; i < n; i++) {
                     if (isCancelled()) {
                         throw new CancellationException();
@@ -97,9 +108,31 @@ final class RatingRunner {
                     } catch (FinstackException e) {
                         out.add(new Outcome(c, null, e, cautions(c)));
                     }
-                    setProgress((i + 1) * 100 / n);
+                    setProgress((i + 1) * share / n);
                 }
-                return out;
+                publish(List.copyOf(out));
+                if (SwingUtilities.isEventDispatchThread()) {
+                    ratingsOnEdt.incrementAndGet();
+                }
+                comparisons.incrementAndGet();
+                return Comparison.of(project, DesignBasis.defaultFor(project.conditions()), band, new Progress() {
+                    @Override
+                    public void step(int done, int total) {
+                        setProgress(share + done * (100 - share) / Math.max(1, total));
+                    }
+
+                    @Override
+                    public boolean cancelled() {
+                        return isCancelled();
+                    }
+                });
+            }
+
+            @Override
+            protected void process(List<List<Outcome>> chunks) {
+                if (mine == generation && !isCancelled() && !chunks.isEmpty()) {
+                    rated.accept(chunks.get(chunks.size() - 1));
+                }
             }
 
             @Override
@@ -110,7 +143,7 @@ final class RatingRunner {
                 pending = false;
                 listener.progress(false, 100);
                 try {
-                    done.accept(get());
+                    compared.accept(get());
                 } catch (InterruptedException e) {
                     Thread.currentThread().interrupt();
                 } catch (ExecutionException e) {
@@ -128,6 +161,11 @@ final class RatingRunner {
         pending = true;
         listener.progress(true, 0);
         w.execute();
+    }
+
+    /** @return how many comparisons were started */
+    int comparisons() {
+        return comparisons.get();
     }
 
     private Rating rate(CoilCase c) {

@@ -27,7 +27,8 @@ import org.finstack.units.Quantities;
 import org.finstack.units.UnitSystem;
 
 /**
- * The selected option's rating: total, sensible and latent capacity, sensible heat ratio,
+ * The selected option's rating: total capacity and its band (10th to 90th percentile, filled in
+ * when the comparison that rates it is done), sensible and latent capacity, sensible heat ratio,
  * condensate, air out and its relative humidity, air pressure drop, airflow, UA, NTU, fin
  * efficiency; for a full refrigerant side its outlet state (superheat or subcooling), mass flow,
  * pressure drop and saturation-temperature drop, charge, the temperature difference on its stated
@@ -39,7 +40,7 @@ final class ResultsPanel extends JPanel {
     private static final long serialVersionUID = 1L;
 
     /** The values shown, in order; each has a label {@code results.KEY}. */
-    static final List<String> KEYS = List.of("capacity", "sensible", "latent", "shr", "airIn", "airOut", "airOutRh",
+    static final List<String> KEYS = List.of("capacity", "capacityBand", "sensible", "latent", "shr", "airIn", "airOut", "airOutRh",
         "condensate", "airPressureDrop", "airflow", "faceVelocity", "ua", "ntu", "finEfficiency",
         "surfaceEffectiveness", "effectiveness", "airCoefficient", "refrigerantOutlet", "refrigerantMassFlow",
         "refrigerantPressureDrop", "saturationDrop", "charge", "td", "energyBalance");
@@ -145,6 +146,11 @@ final class ResultsPanel extends JPanel {
         cautionBox.setVisible(false);
         frost.setText(" ");
         zones.setText(" ");
+    }
+
+    /** @param text what to show for the capacity band: its ends, "working", "off" or why it is missing */
+    void band(String text) {
+        set("capacityBand", text);
     }
 
     /** @param text a status line, e.g. while a rating runs */

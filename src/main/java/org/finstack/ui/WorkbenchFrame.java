@@ -24,6 +24,7 @@ import javax.swing.BorderFactory;
 import javax.swing.ButtonGroup;
 import javax.swing.DefaultListModel;
 import javax.swing.JButton;
+import javax.swing.JCheckBox;
 import javax.swing.JComboBox;
 import javax.swing.JFileChooser;
 import javax.swing.JFrame;
@@ -49,7 +50,6 @@ import javax.swing.Timer;
 import javax.swing.WindowConstants;
 import javax.swing.filechooser.FileNameExtensionFilter;
 import org.finstack.coil.CoilCase;
-import org.finstack.coil.Rating;
 import org.finstack.core.Citation;
 import org.finstack.core.FinstackException;
 import org.finstack.core.InputException;
@@ -61,13 +61,17 @@ import org.finstack.study.Conditions;
 import org.finstack.study.Option;
 import org.finstack.study.Overrides;
 import org.finstack.study.Project;
+import org.finstack.study.compare.BandSettings;
+import org.finstack.study.compare.Comparison;
 import org.finstack.units.Quantities;
 import org.finstack.units.UnitSystem;
 
 /**
- * The workbench window: the options of the project at the left; tabs for the coil (form and
- * drawing), the conditions, the results, the options side by side and the sweeps; a status bar
- * with the rating's progress and Cancel. Every edit re-rates after a pause, off the event thread.
+ * The workbench window: the options of the project at the left (with any entries of the file that
+ * could not be read, and their errors); tabs for the coil (form and drawing), the conditions, the
+ * results, the full comparison side by side and the sweeps; a status bar with the rating's
+ * progress and Cancel. Every edit re-rates after a pause, off the event thread, and then compares
+ * the options, with each option's capacity band unless the toolbar's toggle is off.
  */
 public final class WorkbenchFrame extends JFrame {
 
@@ -96,6 +100,10 @@ public final class WorkbenchFrame extends JFrame {
     private final Timer rateTimer;
     private final List<Action> actions = new ArrayList<>();
     private List<RatingRunner.Outcome> outcomes = List.of();
+    /** The latest comparison of the project's options, or null while it is being worked out. */
+    private Comparison comparison;
+    private final JCheckBox bandToggle = new JCheckBox(Messages.get("toolbar.band"), true);
+    private final JTextArea damagedNote = new JTextArea();
     private boolean syncingList;
     /** A re-rate is due: set when the timer is started, cleared when the rating is started. */
     private boolean ratePending;
@@ -298,6 +306,11 @@ public final class WorkbenchFrame extends JFrame {
         models.setMaximumSize(models.getPreferredSize());
         t.add(models);
         t.addSeparator();
+        bandToggle.setName("toolbar.band");
+        bandToggle.setToolTipText(Messages.get("toolbar.band.tip"));
+        bandToggle.addActionListener(e -> scheduleRate());
+        t.add(bandToggle);
+        t.addSeparator();
         t.add(new JLabel(Messages.get("toolbar.units") + " "));
         si.setName("units.SI");
         us.setName("units.US");
@@ -338,7 +351,19 @@ public final class WorkbenchFrame extends JFrame {
         JScrollPane scroll = new JScrollPane(optionList);
         scroll.setPreferredSize(new Dimension(UIScale.scale(230), UIScale.scale(300)));
         p.add(scroll, BorderLayout.CENTER);
-        p.add(buttons, BorderLayout.SOUTH);
+        damagedNote.setName("options.damaged");
+        damagedNote.setEditable(false);
+        damagedNote.setLineWrap(true);
+        damagedNote.setWrapStyleWord(true);
+        damagedNote.setRows(6);
+        damagedNote.setForeground(Theme.color("Finstack.error", damagedNote.getForeground()));
+        damagedNote.setBorder(BorderFactory.createCompoundBorder(BorderFactory.createMatteBorder(0, UIScale.scale(4),
+                0, 0, Theme.color("Finstack.compare.worseStripe", java.awt.Color.ORANGE)),
+                BorderFactory.createEmptyBorder(4, 6, 4, 4)));
+        JPanel south = new JPanel(new BorderLayout(0, UIScale.scale(6)));
+        south.add(damagedNote, BorderLayout.CENTER);
+        south.add(buttons, BorderLayout.SOUTH);
+        p.add(south, BorderLayout.SOUTH);
         return p;
     }
 
@@ -407,6 +432,13 @@ public final class WorkbenchFrame extends JFrame {
             }
             optionList.setSelectedIndex(model.selected());
             removeAction.setEnabled(all.size() > 1);
+            List<String> damaged = new ArrayList<>();
+            for (Project.Damaged d : p.damaged()) {
+                damaged.add(Messages.format("options.damagedEntry", d.name(), d.field(), d.error()));
+            }
+            damagedNote.setText(damaged.isEmpty() ? "" : Messages.get("options.damagedTitle") + "\n"
+                    + String.join("\n", damaged));
+            damagedNote.setVisible(!damaged.isEmpty());
         } finally {
             syncingList = false;
         }
@@ -458,10 +490,48 @@ public final class WorkbenchFrame extends JFrame {
             return;
         }
         results.headline(Messages.get("status.rating"));
-        runner.rate(model.project(), list -> {
+        runner.rate(model.project(), bandSettings(), list -> {
             outcomes = list;
+            comparison = null;
             showOutcomes();
+        }, c -> {
+            comparison = c;
+            showComparison();
         });
+    }
+
+    /** @return the capacity band's settings: the comparison's default when the toolbar's toggle is on */
+    private BandSettings bandSettings() {
+        return bandToggle.isSelected() ? BandSettings.DEFAULT : BandSettings.OFF;
+    }
+
+    /** Shows the comparison in the side-by-side table and the selected option's band in the results. */
+    private void showComparison() {
+        compare.show(comparison, model.units());
+        results.band(bandText());
+    }
+
+    /** @return the selected option's capacity band in words, from the latest comparison */
+    private String bandText() {
+        if (!bandToggle.isSelected()) {
+            return Messages.get("results.bandOff");
+        }
+        if (comparison == null || comparison.project() != model.project()) {
+            return Messages.get("results.bandPending");
+        }
+        List<Project.Entry> entries = comparison.project().entries();
+        for (int place = 0; place < entries.size(); place++) {
+            if (entries.get(place).option() == model.selected()) {
+                var o = comparison.options().get(place);
+                if (o.band() != null) {
+                    return Messages.format("results.bandValue", Quantities.format(o.band().capacityP10(),
+                            org.finstack.units.Dimension.HEAT_FLOW, model.units()), Quantities.format(
+                                    o.band().capacityP90(), org.finstack.units.Dimension.HEAT_FLOW, model.units()));
+                }
+                return o.bandNote() != null ? Messages.format("results.bandFailed", o.bandNote()) : "-";
+            }
+        }
+        return "-";
     }
 
     private void showOutcomes() {
@@ -479,9 +549,8 @@ public final class WorkbenchFrame extends JFrame {
             }
             coilMap.show(o.ratedCase(), o.rating(), model.units());
         }
-        List<Rating> ratings = new ArrayList<>();
-        list.forEach(o -> ratings.add(o.rating()));
-        compare.show(model.project(), ratings, model.units());
+        compare.show(comparison, model.units());
+        results.band(bandText());
     }
 
     private void chooseAndOpen() {
@@ -502,7 +571,9 @@ public final class WorkbenchFrame extends JFrame {
     }
 
     /**
-     * Opens a project; a damaged or newer file is refused with a message and nothing changes.
+     * Opens a project; a damaged or newer file is refused with a message and nothing changes. An
+     * entry of the file that cannot be read (a bad value in one option) does not refuse the file:
+     * it is listed under the options with its error and written back as it was when saving.
      *
      * @param file the file, or null for the demo project
      * @return whether it was opened
@@ -512,6 +583,7 @@ public final class WorkbenchFrame extends JFrame {
             Project p = file == null ? Workbench.demo() : ProjectFiles.read(file);
             runner.cancel();
             outcomes = List.of();
+            comparison = null;
             model.load(p, file);
             if (file != null) {
                 prefs.addRecent(file);
@@ -547,11 +619,7 @@ public final class WorkbenchFrame extends JFrame {
                     c.refrigerant().equals(base.refrigerant()) ? null : c.refrigerant(),
                     c.fouling().equals(base.fouling()) ? null : c.fouling());
             String name = file.getFileName().toString().replaceFirst("\\.json$", "");
-            Project p = model.project();
-            List<Option> options = new ArrayList<>(p.options());
-            options.add(new Option(name, c.coil(), o));
-            Project next = new Project(p.version(), p.name(), p.conditions(), p.existing(), options, p.constraints(),
-                    p.notes());
+            Project next = model.project().addOption(new Option(name, c.coil(), o));
             model.edit(next, next.allOptions().size() - 1);
             return true;
         } catch (FinstackException e) {
@@ -789,6 +857,21 @@ public final class WorkbenchFrame extends JFrame {
 
     List<RatingRunner.Outcome> outcomes() {
         return outcomes;
+    }
+
+    /** @return the latest comparison, or null while it is worked out */
+    Comparison comparison() {
+        return comparison;
+    }
+
+    /** @return the capacity band's toggle */
+    JCheckBox bandToggle() {
+        return bandToggle;
+    }
+
+    /** @return the note listing the entries not read from the file */
+    JTextArea damagedNote() {
+        return damagedNote;
     }
 
     /** @return whether a rating is waiting on the timer or running */

@@ -13,6 +13,7 @@ import java.util.List;
 import org.finstack.coil.CoilModels;
 import org.finstack.io.ProjectFiles;
 import org.finstack.study.Project;
+import org.finstack.study.uncertainty.UncertaintyBand;
 import org.finstack.testing.Reference;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -20,7 +21,9 @@ import org.junit.jupiter.api.io.TempDir;
 /**
  * {@code finstack compare}: the JSON carries the documented keys and agrees with single ratings
  * of the same coils (CoilModels.rate), every example project compares in both unit systems, and
- * a damaged option in the file is reported while the rest compare.
+ * a damaged option in the file is reported while the rest compare (read by ProjectFiles, no second
+ * path), the capacity band equals study.uncertainty's for the same cases, count and seed, and the
+ * project's room feeds the charge screen.
  */
 class CompareCommandTest {
 
@@ -94,6 +97,52 @@ class CompareCommandTest {
         var table = RateCommandTest.run("compare", file.toString());
         assertThat(table.code()).isZero();
         assertThat(table.out()).contains("#3 not rated: options[1].coil.finPitch");
+    }
+
+    @Test
+    void capacityBandIsInTheJsonAndTheTable() throws IOException {
+        // reference: study.uncertainty's UncertaintyBand of each option's case, default count and seed (30, 1)
+        Path demo = Path.of("examples/projects/otterby-condenser-options.finstack.json");
+        var r = RateCommandTest.run("compare", demo.toString(), "--json");
+        assertThat(r.code()).as(r.err()).isZero();
+        JsonNode options = new ObjectMapper().readTree(r.out()).at("/results/options");
+        Project p = ProjectFiles.read(demo);
+        for (int i = 0; i < options.size(); i++) {
+            UncertaintyBand band = UncertaintyBand.of(p.caseOf(i), 30, 1);
+            assertThat(options.get(i).get("capacityP10_W").asDouble()).isEqualTo(band.capacityP10());
+            assertThat(options.get(i).get("capacityP90_W").asDouble()).isEqualTo(band.capacityP90());
+            assertThat(options.get(i).at("/capacityBand/samples").asInt()).isEqualTo(30);
+            assertThat(options.get(i).has("capacity_W")).isTrue();
+        }
+        var table = RateCommandTest.run("compare", demo.toString());
+        assertThat(table.out()).contains("capacity p10").contains("capacity p90").contains("30 samples, seed 1");
+        var off = RateCommandTest.run("compare", demo.toString(), "--json", "--samples", "0");
+        JsonNode first = new ObjectMapper().readTree(off.out()).at("/results/options/0");
+        assertThat(first.get("capacityP10_W").isNull()).isTrue();
+        assertThat(first.has("capacityBand")).isFalse();
+        assertThat(RateCommandTest.run("compare", demo.toString(), "--samples", "0").out()).doesNotContain("p10");
+        var seeded = RateCommandTest.run("compare", demo.toString(), "--json", "--samples", "12", "--seed", "7");
+        assertThat(new ObjectMapper().readTree(seeded.out()).at("/results/options/0/capacityP90_W").asDouble())
+                .isEqualTo(UncertaintyBand.of(p.caseOf(0), 12, 7).capacityP90());
+    }
+
+    @Test
+    void badSampleCountEndsWithStatus2NamingTheOption() {
+        var r = RateCommandTest.run("compare", FULL.toString(), "--samples", "2");
+        assertThat(r.code()).isEqualTo(2);
+        assertThat(r.err().strip().lines()).singleElement().asString().contains("--samples");
+    }
+
+    @Test
+    void roomFromTheProjectFileScreensTheCharge() throws IOException {
+        // the propane example's invented room; the verdict is ChargeScreening's (EN 378-1 Annex C)
+        Path propane = Path.of("examples/projects/marrowfield-propane-cooler.finstack.json");
+        var r = RateCommandTest.run("compare", propane.toString(), "--json", "--samples", "0");
+        assertThat(r.code()).as(r.err()).isZero();
+        JsonNode o = new ObjectMapper().readTree(r.out()).at("/results/options/0/chargeScreening");
+        assertThat(o.has("within")).isTrue();
+        assertThat(o.has("limit_kg")).isTrue();
+        assertThat(RateCommandTest.run("compare", propane.toString(), "--samples", "0").out()).contains("charge screen");
     }
 
     @Test

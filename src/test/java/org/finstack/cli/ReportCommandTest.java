@@ -11,7 +11,12 @@ import org.apache.pdfbox.text.PDFTextStripper;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
-/** {@code finstack report}: writes a one-page PDF and an HTML page; without an output it says so (invariants of the command; the numbers are checked against single ratings as reference in PdfReportTest). */
+/**
+ * {@code finstack report}: writes a one-page PDF and an HTML page, reports a damaged option and
+ * carries the capacity band unless {@code --samples 0}; without an output it says so (invariants
+ * of the command; the numbers are checked against single ratings and UncertaintyBand as
+ * references in PdfReportTest).
+ */
 class ReportCommandTest {
 
     @TempDir
@@ -29,6 +34,23 @@ class ReportCommandTest {
             assertThat(new PDFTextStripper().getText(doc)).contains("R290").contains("flammable");
         }
         assertThat(Files.readString(html)).contains("<table>").contains("Recommended");
+    }
+
+    @Test
+    void damagedOptionIsReportedAndTheBandIsInTheTable() throws IOException {
+        String text = Files.readString(Path.of("examples/projects/otterby-condenser-options.finstack.json"));
+        int list = text.indexOf('[', text.indexOf("\"options\""));
+        Path file = dir.resolve("damaged.finstack.json");
+        Files.writeString(file, text.substring(0, list + 1) + " { \"name\": \"Broken\", \"coil\": 3 }, "
+                + text.substring(list + 1));
+        Path html = dir.resolve("report.html");
+        var r = RateCommandTest.run("report", file.toString(), "--html", html.toString(), "--samples", "10");
+        assertThat(r.code()).as(r.err()).isZero();
+        assertThat(Files.readString(html)).contains("Broken").contains("not rated: options[0].coil")
+                .contains("Capacity p10 - p90").contains("10 samples, seed 1");
+        var off = RateCommandTest.run("report", file.toString(), "--html", html.toString(), "--samples", "0");
+        assertThat(off.code()).as(off.err()).isZero();
+        assertThat(Files.readString(html)).doesNotContain("Capacity p10 - p90");
     }
 
     @Test

@@ -22,12 +22,26 @@ import org.junit.jupiter.api.io.TempDir;
 /**
  * Project files: they read back exactly as written, saving is atomic and keeps the previous file
  * as NAME.bak, damaged and newer files are refused with the file left untouched, and the parts
- * of any case file can be pasted in. The demo project is the examples' case files.
+ * of any case file can be pasted in. The demo project is the examples' case files. The room
+ * (version 2) is read with its units, written and read back, and a bad value is one line naming
+ * its field; a damaged option is kept with its error and written back verbatim. Unit factors:
+ * NIST SP 811 Appendix B.9 (1 ft = 0.3048 m exactly).
  */
 class ProjectFilesTest {
 
     private static final Path EXAMPLES = Path.of("examples");
     private static final Path DEMO = EXAMPLES.resolve("projects").resolve("otterby-condenser-options.finstack.json");
+    private static final Path PROPANE = EXAMPLES.resolve("projects").resolve("marrowfield-propane-cooler.finstack.json");
+    /** The propane example without its room (invented demo scenario). */
+    private static final String ROOMLESS = read(PROPANE).replaceAll(",\\s*\"room\": \\{[^}]*\\}", "");
+
+    private static String read(Path p) {
+        try {
+            return Files.readString(p);
+        } catch (IOException e) {
+            throw new java.io.UncheckedIOException(e);
+        }
+    }
 
     @TempDir
     Path dir;
@@ -91,10 +105,10 @@ class ProjectFilesTest {
     @Test
     void newerVersionIsRefusedAndLeftUntouched() throws IOException {
         Path f = dir.resolve("future.finstack.json");
-        String text = Files.readString(DEMO).replace("\"version\": 1", "\"version\": 2");
+        String text = Files.readString(DEMO).replace("\"version\": 1", "\"version\": 3");
         Files.writeString(f, text);
         assertThatThrownBy(() -> ProjectFiles.read(f)).isInstanceOf(InputException.class)
-                .hasMessage("version: " + Msg.NEWER_VERSION.format(2, 1));
+                .hasMessage("version: " + Msg.NEWER_VERSION.format(3, 2));
         assertThat(Files.readString(f, StandardCharsets.UTF_8)).isEqualTo(text);
     }
 
@@ -138,6 +152,117 @@ class ProjectFilesTest {
         assertThatThrownBy(() -> ProjectFiles.write(blocked, ProjectFiles.read(DEMO)))
                 .isInstanceOf(java.io.UncheckedIOException.class);
         assertThat(Files.readAllBytes(f)).isEqualTo(before);
+    }
+
+    @Test
+    void roomIsReadWithItsUnits() {
+        // the invented demo room of the propane example
+        Project p = ProjectFiles.read(PROPANE);
+        assertThat(p.version()).isEqualTo(2);
+        assertThat(p.constraints().room()).isEqualTo(new Constraints.Room(180, 60, 1.2, true));
+        // units converted at the edge: 6356.6 ft3 = 180.0 m3 (1 ft = 0.3048 m exactly, NIST SP 811 B.9)
+        String us = ROOMLESS.replace("\"maxDepth\": \"100 mm\", \"circuits\": 2", "\"maxDepth\": \"100 mm\", \"circuits\": 2, \"room\": { \"volume\": \"1000 ft3\", "
+                + "\"floorArea\": \"100 ft2\", \"releaseHeight\": \"4 ft\", \"selfContainedAppliance\": false }");
+        Constraints.Room r = ProjectFiles.parse(us, "us").constraints().room();
+        assertThat(r.volume()).isCloseTo(1000 * Math.pow(0.3048, 3), org.assertj.core.data.Offset.offset(1e-9));
+        assertThat(r.floorArea()).isCloseTo(100 * 0.3048 * 0.3048, org.assertj.core.data.Offset.offset(1e-9));
+        assertThat(r.releaseHeight()).isCloseTo(4 * 0.3048, org.assertj.core.data.Offset.offset(1e-12));
+        assertThat(r.selfContainedAppliance()).isFalse();
+    }
+
+    @Test
+    void roomIsWrittenAsVersion2AndReadsBack() throws IOException {
+        Project p = ProjectFiles.read(DEMO);
+        assertThat(p.version()).isEqualTo(1);
+        Path plain = dir.resolve("plain.finstack.json");
+        ProjectFiles.write(plain, p);
+        // without a room the file keeps version 1, readable by older copies of the program
+        assertThat(Files.readString(plain)).contains("\"version\" : 1");
+        Project withRoom = p.withConstraints(p.constraints().withRoom(new Constraints.Room(42.5, 17, 2.2, false)));
+        Path f = dir.resolve("room.finstack.json");
+        ProjectFiles.write(f, withRoom);
+        String text = Files.readString(f);
+        assertThat(text).contains("\"version\" : 2").contains("\"room\" : {").contains("\"releaseHeight\" : \"2200 mm\"")
+                .contains("\"selfContainedAppliance\" : false");
+        Project back = ProjectFiles.read(f);
+        assertThat(back.constraints()).isEqualTo(withRoom.constraints());
+        assertThat(back.version()).isEqualTo(2);
+        Project again = ProjectFiles.parse(ProjectFiles.toJson(back), "again");
+        assertThat(again).isEqualTo(back);
+    }
+
+    @Test
+    void badRoomValueIsOneLineNamingTheField() {
+        String room = "\"circuits\": 2, \"room\": { \"volume\": \"%s\", \"floorArea\": \"60 m2\", "
+                + "\"releaseHeight\": \"1.2 m\", \"selfContainedAppliance\": %s }";
+        assertThatThrownBy(() -> ProjectFiles.parse(ROOMLESS.replace("\"maxDepth\": \"100 mm\", \"circuits\": 2",
+                String.format(room, "-180 m3", "true")), "x")).isInstanceOf(InputException.class)
+                .hasMessageStartingWith("constraints.room.volume: ").satisfies(e -> assertThat(e.getMessage()).doesNotContain("\n"));
+        assertThatThrownBy(() -> ProjectFiles.parse(ROOMLESS.replace("\"maxDepth\": \"100 mm\", \"circuits\": 2",
+                String.format(room, "180", "\"yes\"")), "x")).isInstanceOf(InputException.class)
+                .hasMessageStartingWith("constraints.room.selfContainedAppliance: must be true or false");
+        assertThatThrownBy(() -> ProjectFiles.parse(ROOMLESS.replace("\"maxDepth\": \"100 mm\", \"circuits\": 2",
+                String.format(room, "180 kg", "true")), "x")).isInstanceOf(InputException.class)
+                .hasMessageStartingWith("constraints.room.volume: ");
+        assertThatThrownBy(() -> ProjectFiles.parse(ROOMLESS.replace("\"maxDepth\": \"100 mm\", \"circuits\": 2",
+                String.format(room, "180 m3", "true").replace("\"floorArea\": \"60 m2\", ", "")), "x"))
+                .isInstanceOf(InputException.class).hasMessage("constraints.room.floorArea: " + Msg.MISSING.format());
+    }
+
+    @Test
+    void damagedOptionIsKeptWithItsErrorAndSavedVerbatim() throws IOException {
+        String damagedEntry = "{ \"name\" : \"Damaged: fins thicker than their pitch\",\n      \"coil\": "
+                + object(Files.readString(DEMO), "\"coil\"").replace("\"0.115 mm\"", "\"3 mm\"")
+                + ",   \"extra spacing kept\":1.50 }";
+        String text = withCandidate(Files.readString(DEMO), damagedEntry);
+        Path f = dir.resolve("damaged.finstack.json");
+        Files.writeString(f, text);
+        Project p = ProjectFiles.read(f);
+        assertThat(p.allOptions()).hasSize(2);
+        assertThat(p.damaged()).singleElement().satisfies(d -> {
+            assertThat(d.field()).isEqualTo("options[0]");
+            assertThat(d.slot()).isZero();
+            assertThat(d.name()).isEqualTo("Damaged: fins thicker than their pitch");
+            // the first problem found in the entry, named by its field
+            assertThat(d.error()).startsWith("options[0].");
+            assertThat(d.json()).isEqualTo(damagedEntry);
+        });
+        assertThat(p.entries()).extracting(Project.Entry::readable).containsExactly(true, false, true);
+        Path saved = dir.resolve("saved.finstack.json");
+        ProjectFiles.write(saved, p.withName("edited"));
+        String out = Files.readString(saved);
+        assertThat(out).contains(damagedEntry);
+        Project back = ProjectFiles.read(saved);
+        assertThat(back).isEqualTo(p.withName("edited"));
+        // a second save writes the same bytes: nothing drifts
+        ProjectFiles.write(saved, back);
+        assertThat(Files.readString(saved)).isEqualTo(out);
+    }
+
+    @Test
+    void damagedExistingCoilLeavesTheCandidatesReadable() {
+        String text = ROOMLESS.replace("\"name\": \"E-1 as found", "\"nmae\": \"E-1 as found");
+        Project p = ProjectFiles.parse(text, "x");
+        assertThat(p.existing()).isNull();
+        assertThat(p.damaged()).singleElement().satisfies(d -> {
+            assertThat(d.existing()).isTrue();
+            assertThat(d.error()).startsWith("existing.nmae: ");
+        });
+        assertThat(ProjectFiles.toJson(p)).contains("\"existing\" : {\n    \"nmae\": \"E-1 as found");
+    }
+
+    @Test
+    void fileWithNoReadableEntryIsRefusedWithTheFirstError() {
+        String text = "{ \"version\": 1, \"name\": \"x\", \"conditions\": " + object(ROOMLESS, "\"conditions\"")
+                + ", \"options\": [ { \"name\": \"a\", \"coil\": { \"tubeOuterDiameter\": \"9.52 mm\" } }, 7 ] }";
+        assertThatThrownBy(() -> ProjectFiles.parse(text, "x")).isInstanceOf(InputException.class)
+                .hasMessageStartingWith("options[0].coil.");
+    }
+
+    /** The project text with one more candidate, as raw text, first in the options list. */
+    private static String withCandidate(String project, String entry) {
+        int list = project.indexOf('[', project.indexOf("\"options\""));
+        return project.substring(0, list + 1) + "\n    " + entry + "," + project.substring(list + 1);
     }
 
     /** The JSON object that follows a key in a case file (balanced braces). */

@@ -18,7 +18,11 @@ import org.finstack.coil.Rating;
 import org.finstack.io.ProjectFiles;
 import org.finstack.study.Cautions;
 import org.finstack.study.Project;
+import org.finstack.study.Progress;
+import org.finstack.study.compare.BandSettings;
 import org.finstack.study.compare.Comparison;
+import org.finstack.study.compare.DesignBasis;
+import org.finstack.study.uncertainty.UncertaintyBand;
 import org.finstack.study.compare.OptionResult;
 import org.finstack.testing.Reference;
 import org.finstack.units.Dimension;
@@ -30,7 +34,8 @@ import org.junit.jupiter.api.Test;
  * The one-page PDF says what the comparison says: its text, read back with PDFBox, holds each
  * option's capacity, air pressure drop and metal mass, and these equal single ratings of the same
  * coils (CoilModels.rate, the independent reference) to the printed digits. Page 1 is rendered to
- * target/report-page1.png for a person to look at.
+ * target/report-page1.png for a person to look at. With capacity bands, the table carries each
+ * option's p10 - p90 (equal to UncertaintyBand's for the same case, count and seed) on the one page.
  */
 class PdfReportTest {
 
@@ -95,6 +100,33 @@ class PdfReportTest {
             }
         }
         assertThat(html).contains("data:image/png;base64,").contains(Cautions.GOVERNING.substring(0, 40));
+    }
+
+    @Test
+    void bandIsInTheTableWhenItFitsOnTheOnePage() throws IOException {
+        // reference: each option's UncertaintyBand (study.uncertainty), default count and seed
+        Project p = ProjectFiles.read(FULL);
+        Comparison c = Comparison.of(p, DesignBasis.defaultFor(p.conditions()), BandSettings.DEFAULT, Progress.NONE);
+        Summary s = Summary.of(c, UnitSystem.SI);
+        assertThat(s.hasBand()).isTrue();
+        assertThat(s.header()).contains("Capacity p10 - p90");
+        assertThat(s.rows()).allMatch(r -> r.size() == s.header().size());
+        assertThat(s.withoutBand().header()).doesNotContain("Capacity p10 - p90");
+        assertThat(s.withoutBand().rows()).allMatch(r -> r.size() == s.header().size() - 1);
+        try (PDDocument doc = Loader.loadPDF(PdfReport.bytes(s))) {
+            assertThat(doc.getNumberOfPages()).isEqualTo(1);
+            String text = new PDFTextStripper().getText(doc).replace('\u00a0', ' ').replaceAll("\\s+", " ");
+            assertThat(text).contains("Capacity p10 - p90").contains("Capacity band:");
+            for (OptionResult o : c.options()) {
+                var band = UncertaintyBand.of(p.caseOf(o.index()), BandSettings.DEFAULT_SAMPLES,
+                        BandSettings.DEFAULT_SEED);
+                assertThat(text).as(o.name()).contains(Quantities.format(band.capacityP10(), Dimension.HEAT_FLOW,
+                        UnitSystem.SI));
+            }
+            ImageIO.write(new PDFRenderer(doc).renderImageWithDPI(0, 110), "png",
+                    Path.of("target/report-band-page1.png").toFile());
+        }
+        assertThat(HtmlReport.html(s)).contains("Capacity p10 - p90");
     }
 
     private static double number(String formatted) {

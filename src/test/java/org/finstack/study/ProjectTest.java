@@ -93,4 +93,35 @@ class ProjectTest {
         org.assertj.core.api.Assertions.assertThatThrownBy(() -> zones.withModel(CoilModel.ISOTHERMAL))
                 .hasMessageStartingWith("insideCoefficient");
     }
+
+    @Test
+    void damagedEntriesKeepTheirPlacesAndSurviveEdits() {
+        Project.Damaged first = new Project.Damaged("options[0]", 0, "bad first", "options[0].coil: is missing", "{}");
+        Project.Damaged last = new Project.Damaged("options[5]", 5, "bad last", "options[5]: must be a JSON object", "7");
+        Project p = project();
+        Project d = new Project(p.version(), p.name(), p.conditions(), p.existing(), p.options(), p.constraints(),
+                p.notes(), List.of(last, first));
+        // existing first; a damaged entry at its slot; one past the end of the list goes last
+        assertThat(d.entries()).extracting(e -> e.readable() ? "option " + e.option() : e.damaged().name())
+                .containsExactly("option 0", "bad first", "option 1", "bad last");
+        // edits keep the damaged entries: none is ever lost
+        assertThat(d.duplicate(1, "copy").damaged()).containsExactly(last, first);
+        assertThat(d.remove(1).damaged()).containsExactly(last, first);
+        assertThat(d.addOption(new Option("added", C2.coil(), null)).damaged()).containsExactly(last, first);
+        assertThat(d.withName("n").withNotes("x").withConditions(p.conditions()).damaged()).hasSize(2);
+        assertThat(d.withConstraints(Constraints.NONE.withRoom(new Constraints.Room(10, 4, 1, false))).damaged())
+                .hasSize(2);
+        assertThat(d.withOption(0, p.existing().withName("renamed")).damaged()).hasSize(2);
+        // the seven-part constructor is the project without damaged entries
+        assertThat(p.damaged()).isEmpty();
+        assertThat(p.entries()).allMatch(Project.Entry::readable);
+    }
+
+    @Test
+    void roomRefusesNonPositiveValuesNamingTheField() {
+        org.assertj.core.api.Assertions.assertThatThrownBy(() -> new Constraints.Room(0, 4, 1, false))
+                .isInstanceOf(org.finstack.core.InputException.class).hasMessageStartingWith("volume:");
+        org.assertj.core.api.Assertions.assertThatThrownBy(() -> new Constraints.Room(10, 4, Double.NaN, true))
+                .isInstanceOf(org.finstack.core.InputException.class).hasMessageStartingWith("releaseHeight:");
+    }
 }

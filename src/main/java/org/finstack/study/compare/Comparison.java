@@ -2,6 +2,7 @@ package org.finstack.study.compare;
 
 import java.util.ArrayList;
 import java.util.Comparator;
+import java.util.concurrent.CancellationException;
 import java.util.List;
 import java.util.Locale;
 import java.util.Objects;
@@ -17,7 +18,9 @@ import org.finstack.fluid.Fluids;
 import org.finstack.fluid.SaturationState;
 import org.finstack.geometry.CoilGeometry;
 import org.finstack.study.Constraints;
+import org.finstack.study.Constraints.Room;
 import org.finstack.study.Option;
+import org.finstack.study.Progress;
 import org.finstack.study.Project;
 import org.finstack.study.fan.FanCurve;
 import org.finstack.study.pressure.ChargeScreening;
@@ -29,6 +32,7 @@ import org.finstack.study.pressure.PressureRating;
 import org.finstack.study.pressure.RefrigerantSafety;
 import org.finstack.study.pressure.RefrigerantSafetyTable;
 import org.finstack.study.pressure.TubePressureRating;
+import org.finstack.study.uncertainty.UncertaintyBand;
 
 /**
  * A project's coils side by side. Each option is rated at the project's conditions (with its own
@@ -47,10 +51,13 @@ import org.finstack.study.pressure.TubePressureRating;
  *     refrigerant, the EN 378-1 Annex C screen against the room when one is given
  *     ({@link ChargeScreening});</li>
  * <li>the project's limits the coil breaks: face width, face height, depth, circuits, required
- *     capacity.</li>
+ *     capacity;</li>
+ * <li>when asked for ({@link BandSettings}), the capacity band (10th to 90th percentile) of the
+ *     rated case at its stated airflow ({@link UncertaintyBand}).</li>
  * </ul>
  * An option that cannot be rated (an impossible combination, a solver that does not converge)
- * carries its reason; the others still compare.
+ * carries its reason, and so does an entry of the project file that could not be read
+ * ({@link Project.Damaged}); the others still compare. Results follow the file's order.
  *
  * @param project the project compared
  * @param basis   the design-pressure and charge basis
@@ -66,7 +73,8 @@ public record Comparison(Project project, DesignBasis basis, List<OptionResult> 
     }
 
     /**
-     * Compares a project's options on the default basis ({@link DesignBasis#defaultFor}).
+     * Compares a project's options on the default basis ({@link DesignBasis#defaultFor}) with the
+     * project's room, without capacity bands.
      *
      * @param project the project
      * @return the comparison
@@ -76,15 +84,37 @@ public record Comparison(Project project, DesignBasis basis, List<OptionResult> 
     }
 
     /**
-     * Compares a project's options.
+     * Compares a project's options without capacity bands.
      *
      * @param project the project
-     * @param basis   the design-pressure and charge basis
+     * @param basis   the design-pressure and charge basis (its room, when it has none, is the project's)
      * @return the comparison
      */
     public static Comparison of(Project project, DesignBasis basis) {
+        return of(project, basis, BandSettings.OFF, Progress.NONE);
+    }
+
+    /**
+     * Compares a project's entries in the file's order ({@link Project#entries()}): each readable
+     * option is rated, a damaged entry carries its error (field and reason), the capacity band of
+     * each rated option is added when asked for.
+     *
+     * @param project  the project
+     * @param basis    the design-pressure and charge basis; without a room of its own, the
+     *                 project's room ({@code constraints.room}) is used for the charge screen
+     * @param band     whether and how to rate the capacity bands
+     * @param progress told after each option; asked between options whether to stop
+     * @return the comparison
+     * @throws java.util.concurrent.CancellationException when {@code progress} asked to stop
+     */
+    public static Comparison of(Project project, DesignBasis basis, BandSettings band, Progress progress) {
         Objects.requireNonNull(project, "project");
         Objects.requireNonNull(basis, "basis");
+        Objects.requireNonNull(band, "band");
+        Objects.requireNonNull(progress, "progress");
+        if (basis.room() == null && project.constraints().room() != null) {
+            basis = basis.withRoom(project.constraints().room());
+        }
         List<Option> all = project.allOptions();
         FanCurve fan = null;
         String fanError = null;
@@ -97,7 +127,19 @@ public record Comparison(Project project, DesignBasis basis, List<OptionResult> 
         }
         OptionalDouble existingCapacity = OptionalDouble.empty();
         List<OptionResult> out = new ArrayList<>();
-        for (int i = 0; i < all.size(); i++) {
+        List<Project.Entry> entries = project.entries();
+        for (int place = 0; place < entries.size(); place++) {
+            if (progress.cancelled()) {
+                throw new CancellationException("comparison stopped");
+            }
+            Project.Entry entry = entries.get(place);
+            if (!entry.readable()) {
+                Project.Damaged d = entry.damaged();
+                out.add(OptionResult.failed(place, d.name(), d.existing(), d.error()));
+                progress.step(place + 1, entries.size());
+                continue;
+            }
+            int i = entry.option();
             Option o = all.get(i);
             boolean existing = project.isExisting(i);
             CoilCase c = project.caseOf(i);
@@ -105,8 +147,9 @@ public record Comparison(Project project, DesignBasis basis, List<OptionResult> 
             try {
                 r = CoilModels.rate(c);
             } catch (FinstackException e) {
-                out.add(new OptionResult(i, o.name(), existing, c, null, e.getMessage(), OptionalDouble.empty(), null,
-                        null, null, List.of()));
+                out.add(new OptionResult(place, o.name(), existing, c, null, e.getMessage(), OptionalDouble.empty(),
+                        null, null, null, List.of(), null, null));
+                progress.step(place + 1, entries.size());
                 continue;
             }
             if (existing) {
@@ -116,43 +159,26 @@ public record Comparison(Project project, DesignBasis basis, List<OptionResult> 
                     ? OptionalDouble.of(r.capacity() / existingCapacity.getAsDouble()) : OptionalDouble.empty();
             FanResult fr = fan != null ? FanMatch.match(c, r, fan)
                     : fanError != null ? new FanResult(null, 0, 0, fanError) : null;
-            out.add(new OptionResult(i, o.name(), existing, c, r, null, ratio, fr, pressure(c, basis),
+            UncertaintyBand b = null;
+            String bandNote = null;
+            if (band.on()) {
+                try {
+                    b = UncertaintyBand.of(c, band.samples(), band.seed());
+                } catch (FinstackException e) {
+                    bandNote = e.getMessage();
+                }
+            }
+            out.add(new OptionResult(place, o.name(), existing, c, r, null, ratio, fr, pressure(c, basis),
                     charge(c, r, basis), constraintIssues(c.coil(), fr != null && fr.found() ? fr.capacity()
-                            : r.capacity(), project.constraints())));
+                            : r.capacity(), project.constraints()), b, bandNote));
+            progress.step(place + 1, entries.size());
         }
         return new Comparison(project, basis, out);
     }
 
-    /**
-     * Adds options that could not even be read (a damaged entry in a project file), keeping the
-     * project file's order by their indices.
-     *
-     * @param unreadable failed results, with their places in the file's options
-     * @return this comparison with them
-     */
-    public Comparison withUnreadable(List<OptionResult> unreadable) {
-        List<OptionResult> merged = new ArrayList<>(unreadable);
-        List<OptionResult> read = new ArrayList<>(options);
-        List<OptionResult> result = new ArrayList<>();
-        int place = 0;
-        while (!merged.isEmpty() || !read.isEmpty()) {
-            int p = place;
-            Optional<OptionResult> bad = merged.stream().filter(u -> u.index() == p).findFirst();
-            if (bad.isPresent()) {
-                result.add(bad.get());
-                merged.remove(bad.get());
-            } else if (!read.isEmpty()) {
-                OptionResult r = read.remove(0);
-                result.add(new OptionResult(place, r.name(), r.existing(), r.ratedCase(), r.rating(), r.error(),
-                        r.capacityRatio(), r.fan(), r.pressure(), r.charge(), r.constraintIssues()));
-            } else {
-                merged.sort(Comparator.comparingInt(OptionResult::index));
-                OptionResult u = merged.remove(0);
-                result.add(OptionResult.failed(place, u.name(), u.existing(), u.error()));
-            }
-            place++;
-        }
-        return new Comparison(project, basis, result);
+    /** @return whether capacity bands were rated (at least one option has one) */
+    public boolean withBand() {
+        return options.stream().anyMatch(o -> o.band() != null);
     }
 
     /** @return the existing coil's result, if the project has one and it was rated */

@@ -6,6 +6,7 @@ import org.finstack.coil.Duty;
 import org.finstack.core.Check;
 import org.finstack.core.Citation;
 import org.finstack.study.Conditions;
+import org.finstack.study.Constraints.Room;
 import org.finstack.study.pressure.DesignPressureCheck;
 import org.finstack.study.pressure.DesignTemperatureLevel;
 

@@ -6,15 +6,19 @@ import java.util.OptionalDouble;
 import org.finstack.coil.CoilCase;
 import org.finstack.coil.Rating;
 import org.finstack.geometry.CoilGeometry;
+import org.finstack.study.Project;
+import org.finstack.study.uncertainty.UncertaintyBand;
 
 /**
  * One coil of a comparison: its rating at the project's conditions and everything compared
  * beside it, or the reason it could not be rated. Values SI.
  *
- * @param index            place in the project's options (existing coil first)
+ * @param index            place among the project's entries in the file's order (existing coil first,
+ *                         damaged entries at their places; {@link Project#entries()})
  * @param name             the option's name
  * @param existing         whether it is the coil in place
- * @param ratedCase        the case that was rated, or null when the option could not be read
+ * @param ratedCase        the case that was rated, or null when the option could not be read (a
+ *                         damaged entry of the project file)
  * @param rating           the rating at the project's conditions, or null
  * @param error            why there is no rating, or null
  * @param capacityRatio    capacity over the existing coil's, each at the project's conditions
@@ -23,10 +27,13 @@ import org.finstack.geometry.CoilGeometry;
  * @param pressure         the design-pressure margin, or null when not rated
  * @param charge           charge and charge screen, or null when not rated
  * @param constraintIssues the project's limits this coil breaks, as sentences
+ * @param band             the capacity band of the rated case (at the stated airflow), or null when no
+ *                         band was asked for or it could not be rated
+ * @param bandNote         why a band asked for is missing, or null
  */
 public record OptionResult(int index, String name, boolean existing, CoilCase ratedCase, Rating rating, String error,
         OptionalDouble capacityRatio, FanResult fan, PressureResult pressure, ChargeResult charge,
-        List<String> constraintIssues) {
+        List<String> constraintIssues, UncertaintyBand band, String bandNote) {
 
     /** Freezes the list. */
     public OptionResult {
@@ -45,7 +52,17 @@ public record OptionResult(int index, String name, boolean existing, CoilCase ra
      */
     public static OptionResult failed(int index, String name, boolean existing, String error) {
         return new OptionResult(index, name, existing, null, null, error, OptionalDouble.empty(), null, null, null,
-                List.of());
+                List.of(), null, null);
+    }
+
+    /** @return the 10th percentile of capacity [W], empty without a band */
+    public OptionalDouble capacityP10() {
+        return band == null ? OptionalDouble.empty() : OptionalDouble.of(band.capacityP10());
+    }
+
+    /** @return the 90th percentile of capacity [W], empty without a band */
+    public OptionalDouble capacityP90() {
+        return band == null ? OptionalDouble.empty() : OptionalDouble.of(band.capacityP90());
     }
 
     /** @return whether the option was rated */
@@ -111,6 +128,9 @@ public record OptionResult(int index, String name, boolean existing, CoilCase ra
         }
         if (pressure != null && !pressure.known()) {
             w.add("Design-pressure margin not worked out: " + pressure.error());
+        }
+        if (bandNote != null) {
+            w.add("Capacity band not worked out: " + bandNote);
         }
         return List.copyOf(w);
     }

@@ -4,8 +4,10 @@
  * the existing coil's, the airflow the project's fan really delivers through it, its refrigerant
  * pressure drop and charge, its metal mass and materials, the margin of its tubes' allowable
  * pressure over the refrigerant's pressure at the highest expected condensing temperature, a
- * charge screen for flammable or toxic refrigerants, and the project's limits it breaks. A coil
- * that cannot be rated reports its reason and the others still compare. Pure functions of
- * immutable records; values in SI.
+ * charge screen for flammable or toxic refrigerants against the project's room, the project's
+ * limits it breaks, and (when asked for, {@link org.finstack.study.compare.BandSettings}) its
+ * capacity band. A coil that cannot be rated, or an entry of the project file that could not be
+ * read, reports its reason and the others still compare. Pure functions of immutable records;
+ * values in SI.
  */
 package org.finstack.study.compare;

@@ -13,6 +13,7 @@ import org.finstack.io.ProjectFiles;
 import org.finstack.study.Option;
 import org.finstack.study.Overrides;
 import org.finstack.study.Project;
+import org.finstack.study.Constraints.Room;
 import org.finstack.study.fan.FanCurve;
 import org.finstack.study.pressure.DesignPressureCheck;
 import org.finstack.study.pressure.TubePressureRating;
@@ -22,7 +23,9 @@ import org.junit.jupiter.api.Test;
 /**
  * The comparison agrees with single ratings of the same coils (CoilModels.rate on each option's
  * case, the independent reference), finds the fan's operating point, and keeps comparing when
- * one option cannot be rated.
+ * one option cannot be rated or read (a damaged entry keeps its place in the file's order). The
+ * charge screen uses the project's room (ChargeScreening, EN 378-1 Annex C, as the reference);
+ * the capacity band is study.uncertainty's UncertaintyBand of the rated case, seeded.
  */
 class ComparisonTest {
 
@@ -138,8 +141,78 @@ class ComparisonTest {
             // these coils hold less, so they pass.
             assertThat(o.charge().screening().within()).isTrue();
         }
-        Comparison noRoom = Comparison.of(p);
+        Comparison noRoom = Comparison.of(p.withConstraints(p.constraints().withRoom(null)));
         assertThat(noRoom.options().get(0).charge().notes()).anyMatch(n -> n.contains("m1 = 0.152 kg"));
+    }
+
+    @Test
+    void theProjectsRoomIsTheOneScreenedAgainst() {
+        // the propane example's invented room (constraints.room): 180 m3, 60 m2, release height 1.2 m, self-contained
+        Project p = ProjectFiles.read(Path.of("examples/projects/marrowfield-propane-cooler.finstack.json"));
+        Comparison c = Comparison.of(p);
+        assertThat(c.basis().room()).isEqualTo(p.constraints().room());
+        for (OptionResult o : c.options()) {
+            var expected = org.finstack.study.pressure.ChargeScreening.screen(o.charge().safety(), 180, 60, 1.2,
+                    o.charge().charge(), true);
+            assertThat(o.charge().screening()).as(o.name()).isEqualTo(expected);
+        }
+        // a room the basis brings wins over the project's
+        Room other = new Room(30, 12, 0.6, false);
+        Comparison stated = Comparison.of(p, DesignBasis.defaultFor(p.conditions()).withRoom(other));
+        assertThat(stated.basis().room()).isEqualTo(other);
+    }
+
+    @Test
+    void capacityBandIsUncertaintyBandOfTheRatedCase() {
+        // the band comes from study.uncertainty (seeded): the same seed and count give the same band
+        Project p = ProjectFiles.read(DEMO);
+        Comparison c = Comparison.of(p, DesignBasis.defaultFor(p.conditions()), BandSettings.DEFAULT,
+                org.finstack.study.Progress.NONE);
+        assertThat(c.withBand()).isTrue();
+        for (OptionResult o : c.options()) {
+            var band = org.finstack.study.uncertainty.UncertaintyBand.of(o.ratedCase(), BandSettings.DEFAULT_SAMPLES,
+                    BandSettings.DEFAULT_SEED);
+            assertThat(o.band()).isEqualTo(band);
+            assertThat(o.capacityP10().getAsDouble()).isLessThan(o.rating().capacity());
+            assertThat(o.capacityP90().getAsDouble()).isGreaterThan(o.rating().capacity());
+        }
+        assertThat(Comparison.of(p).withBand()).isFalse();
+    }
+
+    @Test
+    void aDamagedEntryStandsAtItsPlaceInTheFile() {
+        Project p = ProjectFiles.read(FULL);
+        Project.Damaged d = new Project.Damaged("options[1]", 1, "Broken entry", "options[1].coil.rows: is missing",
+                "{ \"name\": \"Broken entry\" }");
+        Project withDamaged = new Project(p.version(), p.name(), p.conditions(), p.existing(), p.options(),
+                p.constraints(), p.notes(), List.of(d));
+        Comparison c = Comparison.of(withDamaged);
+        assertThat(c.options()).hasSize(p.allOptions().size() + 1);
+        OptionResult bad = c.options().get(2);
+        assertThat(bad.name()).isEqualTo("Broken entry");
+        assertThat(bad.rated()).isFalse();
+        assertThat(bad.error()).isEqualTo("options[1].coil.rows: is missing");
+        assertThat(c.options()).extracting(OptionResult::index).containsExactly(0, 1, 2, 3, 4);
+        assertThat(c.options().get(3).name()).isEqualTo(p.options().get(1).name());
+        assertThat(c.recommended()).isPresent();
+    }
+
+    @Test
+    void stopsWhenAskedBetweenOptions() {
+        Project p = ProjectFiles.read(DEMO);
+        org.finstack.study.Progress stop = new org.finstack.study.Progress() {
+            @Override
+            public void step(int done, int total) {
+                // nothing to show
+            }
+
+            @Override
+            public boolean cancelled() {
+                return true;
+            }
+        };
+        org.assertj.core.api.Assertions.assertThatThrownBy(() -> Comparison.of(p, DesignBasis.defaultFor(
+                p.conditions()), BandSettings.OFF, stop)).isInstanceOf(java.util.concurrent.CancellationException.class);
     }
 
     @Test
