@@ -29,6 +29,23 @@ record CoilSetup(CoilCase c, DerivedGeometry derived, Fluid fluid, RefrigerantFl
     /** Copper and its alloys are attacked by ammonia (common practice; ASHRAE Handbook—Refrigeration). */
     private static final Set<String> COPPER_ALLOYS = Set.of("copper", "copper-etp", "cupronickel-90-10");
 
+    /** Field of the refusal of a refrigerant flow that loses most of the pressure in the circuits. */
+    static final String TOO_MUCH_FLOW = "refrigerant.massFlow";
+
+    /**
+     * The refusal of a flow that loses most of the refrigerant pressure.
+     *
+     * @param massFlow total refrigerant mass flow [kg/s]
+     * @param circuits circuits it runs through
+     * @param percent  share of the pressure lost that is refused [%]
+     * @return the exception, field {@value #TOO_MUCH_FLOW}
+     */
+    static InputException tooMuchFlow(double massFlow, int circuits, int percent) {
+        return new InputException(TOO_MUCH_FLOW, Msg.IMPOSSIBLE, String.format(Locale.ROOT,
+                "%.4g kg/s through %d circuits loses more than %d %% of the refrigerant pressure", massFlow, circuits,
+                percent));
+    }
+
     static CoilSetup of(CoilCase c) {
         CoilGeometry g = c.coil();
         Fluid fluid = Fluids.fast(c.refrigerant().fluid());

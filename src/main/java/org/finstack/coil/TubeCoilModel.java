@@ -5,9 +5,6 @@ import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
 import java.util.function.DoubleUnaryOperator;
-import org.apache.commons.math3.analysis.solvers.BrentSolver;
-import org.apache.commons.math3.exception.NoBracketingException;
-import org.apache.commons.math3.exception.TooManyEvaluationsException;
 import org.finstack.airside.fin.SchmidtFinEfficiency;
 import org.finstack.core.Citation;
 import org.finstack.core.ConvergenceException;
@@ -117,7 +114,6 @@ public final class TubeCoilModel {
      */
     static final double SATURATION_GRID_STEP = 1e-3;
 
-    private static final int MAX_EVALUATIONS = 200;
 
     /** Mixed-outlet enthalpy miss small enough for the outlet condition [J/kg] (about 0.02 K of vapour). */
     static final double ENTHALPY_ACCURACY = 20;
@@ -127,7 +123,6 @@ public final class TubeCoilModel {
     private static final double MAX_LOOSENESS = 20;
 
     /** Field of the refusal of a flow that loses most of the pressure; inside a solve, a flow far too large. */
-    private static final String TOO_MUCH_FLOW = "refrigerant.massFlow";
     private static final double TOO_MUCH_FLOW_MISS = 1e5;
 
     /** Step of the saturation-temperature search for a required capacity [K]. */
@@ -171,70 +166,6 @@ public final class TubeCoilModel {
             throw new InputException("refrigerant.saturationTemperature", Msg.DUTY_DIRECTION, r.duty().id(),
                     r.duty() == Duty.CONDENSER ? "above" : "below", tSat - 273.15, tIn - 273.15);
         }
-    }
-
-    /**
-     * Bounded Brent solve.
-     *
-     * @param f      function with a sign change on [lo, hi]
-     * @param lo     lower end
-     * @param hi     upper end
-     * @param what   quantity, for the exception
-     * @param relTol relative tolerance on the root
-     * @return the root
-     */
-    static double solve(DoubleUnaryOperator f, double lo, double hi, String what, double relTol) {
-        try {
-            return new BrentSolver(relTol, relTol * Math.max(1e-12, Math.abs(hi)), 1e-14).solve(MAX_EVALUATIONS,
-                    f::applyAsDouble, lo, hi);
-        } catch (TooManyEvaluationsException e) {
-            throw new ConvergenceException(what, MAX_EVALUATIONS, hi - lo);
-        } catch (NoBracketingException e) {
-            throw new ConvergenceException(what + " (no sign change between " + lo + " and " + hi + ")", 0,
-                    Math.min(Math.abs(e.getFLo()), Math.abs(e.getFHi())));
-        }
-    }
-
-    /**
-     * Root of a function between two points where it has opposite signs, by the Illinois variant
-     * of regula falsi (Dowell &amp; Jarratt 1971), stopping when |f| or the bracket is small enough.
-     *
-     * @param f         the function
-     * @param a         one end
-     * @param fa        f(a)
-     * @param b         the other end
-     * @param fb        f(b), of the other sign
-     * @param relTol    bracket width, relative to |b|, small enough to stop
-     * @param fTol      |f| small enough to stop
-     * @param what      quantity, for the exception
-     * @return the root
-     */
-    static double illinois(DoubleUnaryOperator f, double a, double fa, double b, double fb, double relTol,
-            double fTol, String what) {
-        int side = 0;
-        for (int i = 0; i < MAX_EVALUATIONS; i++) {
-            double c = (a * fb - b * fa) / (fb - fa);
-            double fc = f.applyAsDouble(c);
-            if (Math.abs(fc) <= fTol || Math.abs(b - a) <= relTol * Math.abs(b)) {
-                return c;
-            }
-            if (fc * fb > 0) {
-                b = c;
-                fb = fc;
-                if (side == -1) {
-                    fa /= 2;
-                }
-                side = -1;
-            } else {
-                a = c;
-                fa = fc;
-                if (side == 1) {
-                    fb /= 2;
-                }
-                side = 1;
-            }
-        }
-        throw new ConvergenceException(what, MAX_EVALUATIONS, Math.abs(b - a));
     }
 
     /** One rating's working state; lives only for the duration of {@link #rate(CoilCase)}. */
@@ -385,7 +316,7 @@ public final class TubeCoilModel {
                 try {
                     o = rated.computeIfAbsent(m, this::evaluate);
                 } catch (InputException e) {
-                    if (!e.field().equals(TOO_MUCH_FLOW)) {
+                    if (!e.field().equals(CoilSetup.TOO_MUCH_FLOW)) {
                         throw e;
                     }
                     return -TOO_MUCH_FLOW_MISS; // far too much flow: the outlet is far short of the target
@@ -432,7 +363,7 @@ public final class TubeCoilModel {
                 b = fa > 0 ? a * step : a / step;
                 fb = miss.applyAsDouble(b);
             }
-            double m = illinois(miss, a, fa, b, fb, 1e-7, ENTHALPY_ACCURACY, "refrigerant mass flow");
+            double m = Roots.illinois(miss, a, fa, b, fb, 1e-7, ENTHALPY_ACCURACY, "refrigerant mass flow");
             lastMassFlow = m;
             return evaluate(m);
         }
@@ -457,7 +388,7 @@ public final class TubeCoilModel {
                 try {
                     p = pass(m, hIn);
                 } catch (InputException e) {
-                    if (e.field().equals(TOO_MUCH_FLOW)) {
+                    if (e.field().equals(CoilSetup.TOO_MUCH_FLOW)) {
                         return null;
                     }
                     throw e;
@@ -551,7 +482,7 @@ public final class TubeCoilModel {
                 b = next;
                 fb = miss.applyAsDouble(b);
             }
-            double t = illinois(miss, a, fa, b, fb, 1e-9, 1e-4 * q.watts(),
+            double t = Roots.illinois(miss, a, fa, b, fb, 1e-9, 1e-4 * q.watts(),
                     "saturation temperature for the required capacity");
             reference = CoilSetup.referencePressure(s.fluid(), withSaturation(t));
             return atOutletCondition(q.outletK());
@@ -735,9 +666,7 @@ public final class TubeCoilModel {
                         p -= r.pressureDrop();
                         h = r.enthalpyOut();
                         if (p <= 0.2 * reference) {
-                            throw new InputException(TOO_MUCH_FLOW, Msg.IMPOSSIBLE, String.format(Locale.ROOT,
-                                    "%.4g kg/s through %d circuits loses more than 80 %% of the refrigerant pressure",
-                                    massFlow, n));
+                            throw CoilSetup.tooMuchFlow(massFlow, n, 80);
                         }
                     }
                     TubeCoilModelMarch.Point last = march.point(p, h);

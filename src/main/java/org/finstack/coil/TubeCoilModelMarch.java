@@ -419,7 +419,7 @@ final class TubeCoilModelMarch {
                 DoubleFunction heatOf = f -> Math.abs(SegmentExchange.exchange(surface, fraction * f, airIn,
                         airMassFlow * f, from.temperature(), cap, film, Warnings.discard()).heat()) - need;
                 share = heatOf.apply(lo) >= 0 ? lo
-                        : TubeCoilModel.solve(heatOf::apply, lo, remaining, "share of a segment up to a phase boundary",
+                        : Roots.solve(heatOf::apply, lo, remaining, "share of a segment up to a phase boundary",
                                 1e-10);
                 x = SegmentExchange.exchange(surface, fraction * share, airIn, airMassFlow * share, cur.temperature(),
                         cap, hi, w);

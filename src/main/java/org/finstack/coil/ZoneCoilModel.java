@@ -4,8 +4,6 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.function.DoubleUnaryOperator;
-import org.apache.commons.math3.analysis.solvers.BrentSolver;
-import org.apache.commons.math3.exception.TooManyEvaluationsException;
 import org.finstack.core.Citation;
 import org.finstack.core.ConvergenceException;
 import org.finstack.core.InputException;
@@ -38,9 +36,17 @@ public final class ZoneCoilModel {
     public static final String ID = "zones";
 
     private static final int MAX_OUTER = 40;
-    private static final int MAX_EVALUATIONS = 200;
     private static final int QUALITY_POINTS = 8;
     private static final int MAX_DUTY_UPDATES = 16;
+
+    /**
+     * Share of the circuits' inlet pressure whose loss is refused: the condenser's outlet pressure
+     * is held at no less than 0.3 of the inlet, where no fixed point of the drop exists.
+     */
+    private static final double LOSS_LIMIT = 0.7;
+
+    /** Outlet miss returned for a trial flow that loses most of the pressure [J/kg]: far short of the target. */
+    private static final double TOO_MUCH_FLOW_MISS = 1e5;
 
     /**
      * Outlet-enthalpy miss at which the outlet condition is met [J/kg] (about 0.005 K of vapour; the
@@ -128,7 +134,15 @@ public final class ZoneCoilModel {
                 return quick;
             }
             DoubleUnaryOperator miss = m -> {
-                Outcome o = evaluate(m, reference);
+                Outcome o;
+                try {
+                    o = evaluate(m, reference);
+                } catch (InputException e) {
+                    if (!e.field().equals(CoilSetup.TOO_MUCH_FLOW)) {
+                        throw e;
+                    }
+                    return -TOO_MUCH_FLOW_MISS;
+                }
                 double target = outletTargetEnthalpy(o.outletPressure, kelvin, evaporator);
                 return evaporator ? o.outletEnthalpy - target : target - o.outletEnthalpy;
             };
@@ -136,21 +150,28 @@ public final class ZoneCoilModel {
             double lo = guess;
             double hi = guess;
             double fLo = miss.applyAsDouble(lo);
+            double fHi = fLo;
             int k = 0;
             if (fLo > 0) {
                 hi = lo * 2;
-                while (miss.applyAsDouble(hi) > 0) {
+                fHi = miss.applyAsDouble(hi);
+                while (fHi > 0) {
                     lo = hi;
+                    fLo = fHi;
                     hi *= 2;
+                    fHi = miss.applyAsDouble(hi);
                     if (++k > 40) {
                         throw new ConvergenceException("refrigerant mass flow (bracket)", k, hi);
                     }
                 }
             } else {
                 lo = hi / 2;
-                while (miss.applyAsDouble(lo) < 0) {
+                fLo = miss.applyAsDouble(lo);
+                while (fLo < 0) {
                     hi = lo;
+                    fHi = fLo;
                     lo /= 2;
+                    fLo = miss.applyAsDouble(lo);
                     if (++k > 40) {
                         throw new InputException(evaporator ? "refrigerant.superheat" : "refrigerant.subcooling",
                                 Msg.IMPOSSIBLE, String.format(Locale.ROOT, "%.1f K cannot be reached: even a tiny "
@@ -159,7 +180,8 @@ public final class ZoneCoilModel {
                     }
                 }
             }
-            double m = solve(miss, lo, hi, "refrigerant mass flow", 1e-10);
+            // the ends' misses as found: a second rating of an end can differ by the pressure-drop tolerance
+            double m = Roots.illinois(miss, lo, fLo, hi, fHi, 1e-10, OUTLET_ACCURACY, "refrigerant mass flow");
             lastMassFlow = m;
             return evaluate(m, reference);
         }
@@ -267,7 +289,7 @@ public final class ZoneCoilModel {
                         "%.0f W is outside what this coil delivers between saturation temperatures %.1f C and %.1f C",
                         q.watts(), lo - 273.15, hi - 273.15));
             }
-            double t = solve(miss, lo, hi, "saturation temperature for the required capacity", 1e-7);
+            double t = Roots.solve(miss, lo, hi, "saturation temperature for the required capacity", 1e-7);
             return atOutletCondition(q.outletK(), CoilSetup.referencePressure(s.fluid(), withSaturation(t)));
         }
 
@@ -278,33 +300,75 @@ public final class ZoneCoilModel {
         }
 
         /**
-         * Rates at a given refrigerant mass flow; iterates the pressure drop, starting from the
-         * last flow's drop, by secant steps on drop(dp) - dp (damped substitution where a secant
-         * step would leave the plausible range).
+         * Rates at a given refrigerant mass flow; iterates the pressure drop dp until the drop the
+         * zones produce, F(dp), equals it. Starts from the last flow's drop; secant steps through
+         * the last two iterates (plain substitution for the first) until both signs of F(dp) - dp
+         * have been seen (it is positive at dp = 0), then Illinois
+         * regula falsi inside that bracket (bisection where a step would leave it), which also
+         * settles where a zone appears or vanishes and F jumps: the bracket then closes on the
+         * jump.
          */
         private Outcome evaluate(double massFlow, double reference) {
-            double dp = lastDrop;
+            boolean evaporating = c.refrigerant().duty() == Duty.EVAPORATOR;
+            double below = 0;
+            double gBelow = Double.NaN;
+            double above = Double.POSITIVE_INFINITY;
+            double gAbove = Double.NaN;
+            int kept = 0;
             double lastDp = Double.NaN;
-            double lastMiss = Double.NaN;
+            double lastG = Double.NaN;
+            double dp = lastDrop;
             Outcome o = null;
             for (int i = 0; i < MAX_OUTER; i++) {
-                o = c.refrigerant().duty() == Duty.EVAPORATOR ? evaporator(massFlow, reference + dp, reference)
+                o = evaporating ? evaporator(massFlow, reference + dp, reference)
                         : condenser(massFlow, reference, Math.max(reference - dp, 0.3 * reference));
                 double next = o.pressureDrop;
-                double miss = next - dp;
-                if (Math.abs(miss) <= 1 + 1e-4 * next) {
-                    lastDrop = next;
+                if (next > (evaporating ? LOSS_LIMIT / (1 - LOSS_LIMIT) : LOSS_LIMIT) * reference) {
+                    throw CoilSetup.tooMuchFlow(massFlow, s.circuits(), (int) Math.round(100 * LOSS_LIMIT));
+                }
+                double g = next - dp;
+                double tolerance = 1 + 1e-4 * next;
+                if (Math.abs(g) <= tolerance || above - below <= tolerance) {
+                    lastDrop = dp;
                     return o;
                 }
-                double step = i < 3 ? next : 0.25 * dp + 0.75 * next; // damped after the first steps
-                if (!Double.isNaN(lastMiss) && miss != lastMiss) {
-                    double secant = dp - miss * (dp - lastDp) / (miss - lastMiss);
-                    if (secant >= 0 && secant <= 2 * Math.max(dp, next)) {
-                        step = secant;
+                if (g > 0) {
+                    kept = kept < 0 ? 0 : kept + 1;
+                    below = dp;
+                    gBelow = g;
+                    if (kept > 1) {
+                        gAbove /= 2;
+                    }
+                } else {
+                    kept = kept > 0 ? 0 : kept - 1;
+                    above = dp;
+                    gAbove = g;
+                    if (kept < -1) {
+                        gBelow /= 2;
                     }
                 }
+                double step;
+                if (Double.isNaN(gBelow) || Double.isNaN(gAbove)) {
+                    // one side only: secant through the last two iterates (substitution creeps where
+                    // F's slope is near 1), at most a hundred substitution steps far
+                    step = next;
+                    if (!Double.isNaN(lastG) && g != lastG) {
+                        double secant = dp - g * (dp - lastDp) / (g - lastG);
+                        if (Math.abs(secant - dp) <= 100 * Math.abs(g) && (secant - dp) * g > 0) {
+                            step = secant;
+                        } else if ((dp - lastDp) * g > 0) {
+                            // |F(dp) - dp| grows on: the root lies further on, so the steps widen
+                            step = dp + Math.copySign(Math.max(Math.abs(g), 2 * Math.abs(dp - lastDp)), g);
+                        }
+                    }
+                } else {
+                    step = (below * gAbove - above * gBelow) / (gAbove - gBelow);
+                }
+                if (!(step > below && step < above)) {
+                    step = Double.isInfinite(above) ? Math.max(next, 2 * below) : 0.5 * (below + above);
+                }
                 lastDp = dp;
-                lastMiss = miss;
+                lastG = g;
                 dp = step;
             }
             throw new ConvergenceException("refrigerant pressure drop", MAX_OUTER, Math.abs(o.pressureDrop - dp));
@@ -385,7 +449,7 @@ public final class ZoneCoilModel {
                 double hOut = in.state().enthalpy() + full.heat() / m;
                 return new Zone(name, available, full, hi, in.state().enthalpy(), hOut, in, s.flow().at(pOut, hOut));
             }
-            double f = solve(x -> Math.abs(SegmentExchange.exchange(surface, x, air.inlet(), x * air.massFlow(), tRef,
+            double f = Roots.solve(x -> Math.abs(SegmentExchange.exchange(surface, x, air.inlet(), x * air.massFlow(), tRef,
                     capacity, hi, Warnings.discard()).heat()) - need, 1e-9 * available, available, name + " zone share", 1e-13);
             SegmentExchange.Result x = SegmentExchange.exchange(surface, f, air.inlet(), f * air.massFlow(), tRef,
                     capacity, hi, Warnings.discard());
@@ -433,7 +497,7 @@ public final class ZoneCoilModel {
                 double hOut = start.enthalpy() + full.heat() / m;
                 return new Zone(name, available, full, hi, start.enthalpy(), hOut, in, s.flow().at(start.pressure(), hOut));
             }
-            double f = solve(x -> Math.abs(SegmentExchange.exchange(surface, x, air.inlet(), x * air.massFlow(),
+            double f = Roots.solve(x -> Math.abs(SegmentExchange.exchange(surface, x, air.inlet(), x * air.massFlow(),
                     start.temperature(), cp, hi, Warnings.discard()).heat()) - need, 1e-9, available, name + " zone share", 1e-13);
             SegmentExchange.Result x = SegmentExchange.exchange(surface, f, air.inlet(), f * air.massFlow(),
                     start.temperature(), cp, hi, Warnings.discard());
@@ -624,17 +688,6 @@ public final class ZoneCoilModel {
     /** Equivalent length of one 180-degree return bend in diameters (common practice for close-radius bends). */
     static final double BEND_EQUIVALENT_DIAMETERS = 30;
 
-    private static double solve(DoubleUnaryOperator f, double lo, double hi, String what, double relTol) {
-        try {
-            return new BrentSolver(relTol, relTol * Math.max(1e-12, Math.abs(hi)), 1e-14).solve(MAX_EVALUATIONS,
-                    f::applyAsDouble, lo, hi);
-        } catch (TooManyEvaluationsException e) {
-            throw new ConvergenceException(what, MAX_EVALUATIONS, hi - lo);
-        } catch (org.apache.commons.math3.exception.NoBracketingException e) {
-            throw new ConvergenceException(what + " (no sign change between " + lo + " and " + hi + ")", 0,
-                    Math.min(Math.abs(e.getFLo()), Math.abs(e.getFHi())));
-        }
-    }
 
     private record Zone(String name, double fraction, SegmentExchange.Result x, double insideCoefficient, double hIn,
             double hOut, RefrigerantFlow.Local in, RefrigerantFlow.Local out) {
