@@ -25,9 +25,10 @@ import org.finstack.geometry.DerivedGeometry;
  * @param airCoefficient dry air-side coefficient h_o [W/(m2 K)]
  * @param fin            the fin-efficiency method
  * @param cell           the fin cell
+ * @param finBound       the method bound to this cell and fin material
  */
 public record CoilSurface(CoilGeometry coil, DerivedGeometry derived, FoulingResistances fouling,
-        double airCoefficient, FinEfficiencyMethod fin, PlateFinCell cell) {
+        double airCoefficient, FinEfficiencyMethod fin, PlateFinCell cell, FinEfficiencyMethod.Bound finBound) {
 
     /**
      * @param coil           the coil
@@ -39,8 +40,10 @@ public record CoilSurface(CoilGeometry coil, DerivedGeometry derived, FoulingRes
     public static CoilSurface of(CoilGeometry coil, FoulingResistances fouling, double airCoefficient,
             FinEfficiencyMethod fin) {
         DerivedGeometry d = coil.derive();
-        return new CoilSurface(coil, d, fouling, airCoefficient, fin, new PlateFinCell(d.collarDiameter(),
-                coil.finThickness(), coil.transversePitch(), coil.rowPitch(), coil.arrangement() == Arrangement.STAGGERED));
+        PlateFinCell cell = new PlateFinCell(d.collarDiameter(), coil.finThickness(), coil.transversePitch(),
+                coil.rowPitch(), coil.arrangement() == Arrangement.STAGGERED);
+        return new CoilSurface(coil, d, fouling, airCoefficient, fin, cell,
+                fin.bind(cell, coil.finMaterial().conductivity()));
     }
 
     /**
@@ -51,7 +54,7 @@ public record CoilSurface(CoilGeometry coil, DerivedGeometry derived, FoulingRes
      * @return eta_f [-]
      */
     public double finEfficiency(double h, Warnings w) {
-        return fin.efficiency(cell, h, coil.finMaterial().conductivity(), w);
+        return finBound.efficiency(h, w);
     }
 
     /**

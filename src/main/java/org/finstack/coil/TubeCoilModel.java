@@ -552,21 +552,33 @@ public final class TubeCoilModel {
          * @return the largest of the passes' changes over its tolerance (at most 1 when settled)
          */
         private double residual(Pass p, double split, double[] lastOutlet) {
-            double outletChange = Double.POSITIVE_INFINITY;
-            if (lastOutlet != null) {
-                outletChange = 0;
-                for (int i = 0; i < lastOutlet.length; i++) {
-                    outletChange = Math.max(outletChange, Math.abs(p.outletEnthalpy[i] - lastOutlet[i]));
-                }
+            return Math.max(settling(p, split), outletChange(p, lastOutlet) / OUTLET_TOLERANCE);
+        }
+
+        /** @return the largest change of a circuit's outlet enthalpy since the pass before [J/kg] */
+        private static double outletChange(Pass p, double[] lastOutlet) {
+            if (lastOutlet == null) {
+                return Double.POSITIVE_INFINITY;
             }
+            double change = 0;
+            for (int i = 0; i < lastOutlet.length; i++) {
+                change = Math.max(change, Math.abs(p.outletEnthalpy[i] - lastOutlet[i]));
+            }
+            return change;
+        }
+
+        /**
+         * @return the largest over its tolerance of the air's change, the circuits' pressure
+         *         changes, the split's deviation and the energy balance (the outlets aside)
+         */
+        private double settling(Pass p, double split) {
             double refrigerantDuty = 0;
             for (double d : p.duty) {
                 refrigerantDuty += d;
             }
             double balance = Math.abs(faceAirDuty() - refrigerantDuty) / Math.max(Math.abs(refrigerantDuty), 1e-9);
             return Math.max(Math.max(p.airChange / AIR_TOLERANCE_K, p.pressureChange),
-                    Math.max(split / SPLIT_TOLERANCE, Math.max(outletChange / OUTLET_TOLERANCE,
-                            balance / BALANCE_TOLERANCE)));
+                    Math.max(split / SPLIT_TOLERANCE, balance / BALANCE_TOLERANCE));
         }
 
         /**

@@ -137,19 +137,33 @@ public final class SchmidtFinEfficiency implements FinEfficiencyMethod {
      */
     @Override
     public double efficiency(PlateFinCell cell, double h, double kFin, Warnings w) {
+        return bind(cell, kFin).efficiency(h, w);
+    }
+
+    /**
+     * {@inheritDoc}
+     *
+     * <p>Re/r and its length factor are worked out here once; the efficiency at a coefficient h
+     * is then tanh(z)/z with z = r phi (2 h / (k t))^(1/2).
+     */
+    @Override
+    public Bound bind(PlateFinCell cell, double kFin) {
         Objects.requireNonNull(cell, "cell");
-        Objects.requireNonNull(w, "w");
-        Check.positive("h", h);
         Check.positive("kFin", kFin);
         double t = cell.finThickness();
         double reOverR = equivalentRadiusRatio(cell);
-        double m = Math.sqrt(2 * h / (kFin * t));
-        double z = m * cell.collarRadius() * phi(reOverR);
-        double eta = tanhOverX(z);
-        VALIDITY.check(NAME, "Bi", h * 0.5 * t / kFin, w);
-        VALIDITY.check(NAME, "Re/r", reOverR, w);
-        VALIDITY.check(NAME, "eta", eta, w);
-        return eta;
+        double length = cell.collarRadius() * phi(reOverR) * Math.sqrt(2 / (kFin * t));
+        return (h, w) -> {
+            Objects.requireNonNull(w, "w");
+            Check.positive("h", h);
+            double eta = tanhOverX(length * Math.sqrt(h));
+            if (w.keeps()) {
+                VALIDITY.check(NAME, "Bi", h * 0.5 * t / kFin, w);
+                VALIDITY.check(NAME, "Re/r", reOverR, w);
+                VALIDITY.check(NAME, "eta", eta, w);
+            }
+            return eta;
+        };
     }
 
     /** tanh(z)/z for z &gt;= 0, with its Taylor series near zero (where 0/0 would threaten). */
