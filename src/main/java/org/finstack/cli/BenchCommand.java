@@ -32,8 +32,13 @@ final class BenchCommand implements Callable<Integer> {
     /** Monte Carlo samples of the timed uncertainty band. */
     private static final int BAND_SAMPLES = 50;
 
-    private static org.finstack.study.Project demoProject() throws java.io.IOException {
-        String resource = "/examples/projects/otterby-condenser-options.finstack.json";
+    /** Demo project of the isothermal search timing (version 1 conditions). */
+    private static final String ISOTHERMAL_PROJECT = "/examples/projects/otterby-condenser-options.finstack.json";
+
+    /** Demo project of the search timing with the zone model. */
+    private static final String ZONE_PROJECT = "/examples/projects/otterby-condenser-search.finstack.json";
+
+    private static org.finstack.study.Project demoProject(String resource) throws java.io.IOException {
         try (java.io.InputStream in = BenchCommand.class.getResourceAsStream(resource)) {
             if (in == null) {
                 throw new IllegalStateException("demo project missing from the jar: " + resource);
@@ -80,8 +85,11 @@ final class BenchCommand implements Callable<Integer> {
         }
         TableBenchmark.Result r = TableBenchmark.run(settings);
         CoilBenchmark.Result coils = coilRuns == 0 ? null : CoilBenchmark.run(coilRuns, SEGMENTS);
+        int threads = Runtime.getRuntime().availableProcessors();
         SearchBenchmark.Result search = coilRuns == 0 ? null
-                : SearchBenchmark.candidatesPerSecond(demoProject(), Runtime.getRuntime().availableProcessors(), 1.0);
+                : SearchBenchmark.candidatesPerSecond(demoProject(ZONE_PROJECT), threads, 1.0);
+        SearchBenchmark.Result isothermalSearch = coilRuns == 0 ? null
+                : SearchBenchmark.candidatesPerSecond(demoProject(ISOTHERMAL_PROJECT), threads, 1.0);
         UncertaintyBand.Timing band = coilRuns == 0 ? null
                 : UncertaintyBand.time(CoilBenchmark.benchmarkCase(org.finstack.coil.RefrigerantSide.Model.ZONES, 10),
                         BAND_SAMPLES, 1);
@@ -107,6 +115,10 @@ final class BenchCommand implements Callable<Integer> {
                 }
                 res.put("coilRuns", coils.runs());
                 res.put("searchCandidatesPerSecond", search.candidatesPerSecond());
+                res.put("searchModel", search.model());
+                res.put("searchCandidatesPerSearch", search.candidatesPerSearch());
+                res.put("searchSecondsPerSearch", search.seconds() / search.searches());
+                res.put("searchCandidatesPerSecondIsothermal", isothermalSearch.candidatesPerSecond());
                 res.put("uncertaintyBand_ms", band.seconds() * 1000);
                 res.put("uncertaintyBandSamples", BAND_SAMPLES);
             }
@@ -149,8 +161,11 @@ final class BenchCommand implements Callable<Integer> {
                 }
                 out.printf(Locale.ROOT, "  uncertainty band, %d samples (zone model) %8.0f ms%n", BAND_SAMPLES,
                         band.seconds() * 1000);
+                out.printf(Locale.ROOT, "  candidate search (demo project, model %s)     %8.0f candidates/s "
+                        + "(%d candidates in %.1f s)%n", search.model(), search.candidatesPerSecond(),
+                        search.candidatesPerSearch(), search.seconds() / search.searches());
                 out.printf(Locale.ROOT, "  candidate search (demo project, isothermal)  %8.0f candidates/s%n",
-                        search.candidatesPerSecond());
+                        isothermalSearch.candidatesPerSecond());
             }
         }
         return 0;

@@ -12,7 +12,9 @@ import org.finstack.material.Materials;
  * circuits, 3/8 in copper tubes on 25.4 x 22 mm, 12 fpi plain aluminium fins, 1 m finned, an
  * R-134a evaporator at 7 C in 27 C / 50 % air with 5 K superheat (the mass flow is solved), 10
  * segments per tube for the tube-by-tube model. A measurement, not a test: medians of repeated
- * ratings after warm-up, wall-clock on whatever machine runs it.
+ * ratings after a warm-up of {@value #WARM_UP_SECONDS_PER_RUN} s per timed run (at most
+ * {@value #MAX_WARM_UP_SECONDS} s) per case, wall-clock on
+ * whatever machine runs it.
  */
 public final class CoilBenchmark {
 
@@ -62,8 +64,19 @@ public final class CoilBenchmark {
                 runs);
     }
 
+    /**
+     * Warm-up time per case and timed run before timing, up to {@value #MAX_WARM_UP_SECONDS} s
+     * (the just-in-time compiler settles meanwhile) [s].
+     */
+    static final double WARM_UP_SECONDS_PER_RUN = 0.2;
+
+    /** Longest warm-up per case [s]. */
+    static final double MAX_WARM_UP_SECONDS = 2;
+
     private static double median(CoilCase c, int runs) {
-        for (int i = 0; i < runs; i++) {
+        long warmStart = System.nanoTime();
+        double warmUp = Math.min(MAX_WARM_UP_SECONDS, WARM_UP_SECONDS_PER_RUN * runs) * 1e9;
+        for (int i = 0; i < runs || System.nanoTime() - warmStart < warmUp; i++) {
             CoilModels.rate(c);
         }
         double[] t = new double[runs];

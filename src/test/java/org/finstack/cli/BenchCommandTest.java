@@ -21,7 +21,8 @@ class BenchCommandTest {
         JsonNode res = new ObjectMapper().readTree(r.out()).get("results");
         for (String k : new String[] {"eosCallsPerSecond", "tableCallsPerSecond", "tableSpeedup", "fluids",
             "pointsPerFluid", "eosCalls", "tableCalls", "perFluid", "zoneRatingMedian_ms", "tubeRatingMedian_ms",
-            "tubeRatingBySegments", "searchCandidatesPerSecond", "uncertaintyBand_ms"}) {
+            "tubeRatingBySegments", "searchCandidatesPerSecond", "searchModel", "searchCandidatesPerSearch",
+            "searchCandidatesPerSecondIsothermal", "uncertaintyBand_ms"}) {
             assertThat(res.has(k)).as(k).isTrue();
         }
         double speedup = res.get("tableSpeedup").asDouble();
@@ -31,6 +32,9 @@ class BenchCommandTest {
         assertThat(res.get("perFluid").get(0).get("maxTemperatureDeviation_K").asDouble()).isLessThan(0.01);
         assertThat(res.get("zoneRatingMedian_ms").asDouble()).isPositive();
         assertThat(res.get("tubeRatingBySegments").size()).isEqualTo(3);
+        // the search timing uses the refrigerant-side model of its demo project
+        assertThat(res.get("searchModel").asText()).isEqualTo("zones");
+        assertThat(res.get("searchCandidatesPerSearch").asInt()).isGreaterThan(1000);
     }
 
     @Test

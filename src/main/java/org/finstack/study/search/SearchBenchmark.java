@@ -14,13 +14,11 @@ import org.finstack.study.Project;
  * after one untimed warm-up search, repeated until a minimum time has passed. A measurement,
  * not a test.
  *
- * <p>Measured (2 worker threads on a 2-core machine shared with other work, load average 4 to 7;
- * {@link #benchSpace} of the demo projects): isothermal model, 1800 candidates per search, about
- * 18 000 candidates per second of wall-clock time (10 000 per processor-second); zone model,
- * 2280 candidates per search (419 of them failing), about 136 per second (16.7 s per search),
- * 133 per second without the 7 mm pattern. Most zone-model candidates take 3 to 5 ms; the slow
- * ones are 7 mm and 3/8 in coils on one or two circuits, whose refrigerant pressure-drop loop runs
- * to its iteration limit (up to some 70 ms each) and then fails.
+ * <p>Measured (2 worker threads on a 2-core machine shared with other work; {@link #benchSpace}
+ * of the demo projects): isothermal model, 1800 candidates per search, 14 000 to 35 000
+ * candidates per second of wall-clock time; zone model, 2280 candidates per search (142 of them
+ * refused with their reason: one-row louvered fins, and single-circuit 7 mm condensers that lose
+ * most of their pressure), about 950 per second (2.4 s per search).
  */
 public final class SearchBenchmark {
 
