@@ -9,7 +9,6 @@ import java.util.List;
 import java.util.Locale;
 import java.util.OptionalDouble;
 import java.util.concurrent.Callable;
-import org.finstack.core.InputException;
 import org.finstack.io.ProjectFiles;
 import org.finstack.study.Project;
 import org.finstack.study.Progress;
@@ -23,6 +22,7 @@ import org.finstack.units.Quantities;
 import org.finstack.units.UnitSystem;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
@@ -56,20 +56,14 @@ final class CompareCommand implements Callable<Integer> {
                     + "(default: the EN 378-2 level for the entering air, from memory)")
     private String designTemperature;
 
-    @Option(names = "--samples", paramLabel = "N", defaultValue = "" + BandSettings.DEFAULT_SAMPLES,
-            description = "Monte Carlo samples of each option's capacity band (10th to 90th percentile over the "
-                    + "air-side correlation's published scatter); 0 = no band (default: ${DEFAULT-VALUE})")
-    private int samples;
-
-    @Option(names = "--seed", paramLabel = "SEED", defaultValue = "" + BandSettings.DEFAULT_SEED,
-            description = "random seed of the capacity bands (default: ${DEFAULT-VALUE})")
-    private long seed;
+    @Mixin
+    private BandOptions band = new BandOptions();
 
     @Override
     public Integer call() throws Exception {
         UnitSystem system = Output.system(units);
         Project project = ProjectFiles.read(projectFile);
-        Comparison c = Comparison.of(project, basis(project, designTemperature), band(samples, seed),
+        Comparison c = Comparison.of(project, basis(project, designTemperature), band.settings(),
                 Progress.NONE);
         PrintWriter out = spec.commandLine().getOut();
         if (json) {
@@ -88,19 +82,6 @@ final class CompareCommand implements Callable<Integer> {
         }
         double t = Quantities.parse("--design-temperature", designTemperature, Dimension.TEMPERATURE);
         return DesignBasis.stated(t, "stated on the command line: " + designTemperature.strip());
-    }
-
-    /**
-     * @param samples the {@code --samples} value
-     * @param seed    the {@code --seed} value
-     * @return the band settings, a bad count refused naming {@code --samples}
-     */
-    static BandSettings band(int samples, long seed) {
-        try {
-            return new BandSettings(samples, seed);
-        } catch (InputException e) {
-            throw new InputException("--samples", e.msg(), e.args());
-        }
     }
 
     static ObjectNode json(Comparison c) {

@@ -15,6 +15,7 @@ import org.finstack.study.compare.BandSettings;
 import org.finstack.study.compare.Comparison;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
@@ -47,14 +48,8 @@ final class ReportCommand implements Callable<Integer> {
             description = "highest expected saturation temperature for the design-pressure margin, e.g. \"60 C\"")
     private String designTemperature;
 
-    @Option(names = "--samples", paramLabel = "N", defaultValue = "" + BandSettings.DEFAULT_SAMPLES,
-            description = "Monte Carlo samples of each option's capacity band shown in the table; 0 = no band "
-                    + "(default: ${DEFAULT-VALUE})")
-    private int samples;
-
-    @Option(names = "--seed", paramLabel = "SEED", defaultValue = "" + BandSettings.DEFAULT_SEED,
-            description = "random seed of the capacity bands (default: ${DEFAULT-VALUE})")
-    private long seed;
+    @Mixin
+    private BandOptions band = new BandOptions();
 
     @Override
     public Integer call() {
@@ -64,7 +59,7 @@ final class ReportCommand implements Callable<Integer> {
         var system = Output.system(units);
         Project project = ProjectFiles.read(projectFile);
         Comparison c = Comparison.of(project, CompareCommand.basis(project, designTemperature),
-                CompareCommand.band(samples, seed), Progress.NONE);
+                band.settings(), Progress.NONE);
         Summary s = Summary.of(c, system);
         PrintWriter out = spec.commandLine().getOut();
         if (pdf != null) {
