@@ -106,7 +106,7 @@ public final class EpsilonNtu {
             return -Math.expm1(-ntu);
         }
         // round-off in the series and closed forms can land a few ulps above the limit at large NTU
-        return Math.min(raw(a, ntu, cr), maxEffectiveness(a, cr));
+        return Math.min(Math.min(raw(a, ntu, cr), maxEffectiveness(a, cr)), 1);
     }
 
     private static double raw(Arrangement a, double ntu, double cr) {
@@ -144,7 +144,8 @@ public final class EpsilonNtu {
             }
             double ratio = cc.airIsCmin() ? cr : 1 / cr;
             double p = tubeEffectiveness(cc.rows(), 1, ratio);
-            return cc.airIsCmin() ? p / cr : p;
+            // dividing by C_r can land one ulp above 1 when the rows' limit is counterflow's
+            return Math.min(1, cc.airIsCmin() ? p / cr : p);
         }
         return switch ((FlowArrangement) a) {
             case COUNTERFLOW, CROSSFLOW_BOTH_UNMIXED, CROSSFLOW_BOTH_UNMIXED_APPROX -> 1;

@@ -40,6 +40,17 @@ class EpsilonNtuProperties {
         assertThat(eps).as(a.id()).isLessThanOrEqualTo(EpsilonNtu.maxEffectiveness(a, cr) + 1e-12);
     }
 
+    /** Regression: with the air as C_min and a tiny C_r the limit once came out 1.0000000000000002 (division by C_r). */
+    @net.jqwik.api.Example
+    void counterCrossflowNeverExceedsOneAtTinyCapacityRatios() {
+        double[][] cases = { { 4, 6.452719, 1.3e-5 }, { 3, 46.364582, 4e-6 }, { 4, 34.020559, 6.3e-5 }, { 4, 7.777445, 1.07e-4 } };
+        for (double[] c : cases) {
+            Arrangement a = CounterCrossflow.rows((int) c[0], true);
+            assertThat(EpsilonNtu.maxEffectiveness(a, c[2])).as(a.id()).isLessThanOrEqualTo(1.0);
+            assertThat(EpsilonNtu.effectiveness(a, c[1], c[2])).as(a.id()).isLessThanOrEqualTo(1.0);
+        }
+    }
+
     @Property(tries = 400)
     void effectivenessRisesWithNtu(@ForAll("arrangements") Arrangement a,
             @ForAll @Scale(6) @DoubleRange(min = 0, max = 20) double ntu, @ForAll @Scale(6) @DoubleRange(min = 1e-3, max = 2) double dNtu,
