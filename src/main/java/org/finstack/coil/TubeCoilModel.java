@@ -5,6 +5,7 @@ import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
 import java.util.function.DoubleUnaryOperator;
+import java.util.stream.IntStream;
 import org.finstack.airside.fin.SchmidtFinEfficiency;
 import org.finstack.core.Citation;
 import org.finstack.core.ConvergenceException;
@@ -194,7 +195,11 @@ public final class TubeCoilModel {
         private double airMean;
 
         /** air[r][j][k]: air entering row r at place j, segment column k; air[rows] leaves the coil. */
-        private final MoistAirState[][][] airState;
+        private MoistAirState[][][] airState;
+        /** The buffer a pass writes the leaving air of every tube into (row 0 always the entering air). */
+        private MoistAirState[][][] airNext;
+        /** Index of each circuit's first tube in the march's segment slots (tubes numbered circuit by circuit). */
+        private final int[] firstTube;
 
         /** Per circuit: share of the total flow, and pressure drop of the last pass [Pa]. */
         private final double[] share;
@@ -230,18 +235,28 @@ public final class TubeCoilModel {
             this.segmentVolume = s.derived().internalVolume() * fraction;
             this.circuits = s.circuiting().circuits();
             this.march = new TubeCoilModelMarch(s.fluid(), s.flow(), evaporator, tubes * segments,
-                    s.referencePressure());
-            this.airState = new MoistAirState[rows + 1][places][segments];
-            for (MoistAirState[][] layer : airState) {
-                for (MoistAirState[] place : layer) {
-                    Arrays.fill(place, air.inlet());
-                }
+                    circuits.size(), s.referencePressure());
+            this.firstTube = new int[circuits.size()];
+            for (int i = 1; i < firstTube.length; i++) {
+                firstTube[i] = firstTube[i - 1] + circuits.get(i - 1).size();
             }
+            this.airState = enteringAirEverywhere();
+            this.airNext = enteringAirEverywhere();
             this.share = new double[circuits.size()];
             this.drop = new double[circuits.size()];
             resetSplit();
             this.reference = s.referencePressure();
             setAirMean(air.inlet().dryBulb());
+        }
+
+        private MoistAirState[][][] enteringAirEverywhere() {
+            MoistAirState[][][] a = new MoistAirState[rows + 1][places][segments];
+            for (MoistAirState[][] layer : a) {
+                for (MoistAirState[] place : layer) {
+                    Arrays.fill(place, air.inlet());
+                }
+            }
+            return a;
         }
 
         private void resetSplit() {
@@ -626,8 +641,27 @@ public final class TubeCoilModel {
                 double airIn, double airOut, double duty) {
         }
 
+        /** One circuit's march in a pass. */
+        private record CircuitPass(double drop, double inletPressure, double outletPressure, double outletEnthalpy,
+                double duty, double airChange, double charge, double resistanceSum, List<TubeState> tubeStates) {
+        }
+
+        /**
+         * Marches every circuit once through the air of the last pass. Each tube reads the air
+         * that entered its row in the last pass and writes the air that leaves it into the next
+         * buffer, so the circuits do not depend on one another within a pass and are marched in
+         * parallel; the result does not depend on the order or the threads (the default circuits
+         * run from the leaving row to the entering row and read last-pass air in any case).
+         */
         private Pass pass(double massFlow, double hIn) {
             int n = circuits.size();
+            List<Object> marched = IntStream.range(0, n).parallel().mapToObj(ci -> {
+                try {
+                    return (Object) marchCircuit(ci, massFlow, hIn);
+                } catch (RuntimeException e) {
+                    return e; // rethrown below as itself: a pool thread's exception would come back wrapped
+                }
+            }).toList();
             double[] newDrop = new double[n];
             double[] pOutAll = new double[n];
             double[] hOutAll = new double[n];
@@ -638,70 +672,88 @@ public final class TubeCoilModel {
             double charge = 0;
             double resistanceSum = 0;
             List<TubeState> tubeStates = new ArrayList<>(tubes);
-            int tubeIndex = 0;
             for (int ci = 0; ci < n; ci++) {
-                List<Circuiting.Tube> path = circuits.get(ci);
-                double m = massFlow * share[ci];
-                double g = m / s.tubeFlowArea();
-                double pIn = evaporator ? reference + drop[ci] : reference;
-                march.startCircuit();
-                double p = pIn;
-                double h = hIn;
-                double duty = 0;
-                for (int ti = 0; ti < path.size(); ti++, tubeIndex++) {
-                    Circuiting.Tube t = path.get(ti);
-                    boolean forward = ti % 2 == 0;
-                    TubeCoilModelMarch.Point start = march.point(p, h);
-                    double tubeDuty = 0;
-                    double airInSum = 0;
-                    double airOutSum = 0;
-                    double massSum = 0;
-                    double mAirSegment = air.massFlow() * profile[t.position()] / ((double) places * segments);
-                    for (int step = 0; step < segments; step++) {
-                        int k = forward ? step : segments - 1 - step;
-                        int slot = tubeIndex * segments + step;
-                        MoistAirState in = airState[t.row()][t.position()][k];
-                        TubeCoilModelMarch.Result r = march.segment(slot, surfaces[t.position()], fraction, in, mAirSegment,
-                                p, h, m, g, segmentLength, segmentInsideArea);
-                        MoistAirState old = airState[t.row() + 1][t.position()][k];
-                        MoistAirState next = r.airOut();
-                        // on enthalpy: a surface switching between wet and dry moves the leaving air's
-                        // dry bulb and humidity by a step but its enthalpy (the heat) hardly at all
-                        airChange = Math.max(airChange, Math.abs(old.enthalpy() - next.enthalpy()) / CP_AIR);
-                        airState[t.row() + 1][t.position()][k] = next;
-                        airInSum += mAirSegment * in.dryBulb();
-                        airOutSum += mAirSegment * r.airOut().dryBulb();
-                        massSum += mAirSegment;
-                        tubeDuty += r.heat();
-                        charge += r.chargeDensity() * segmentVolume;
-                        resistanceSum += 1 / r.insideCoefficient();
-                        p -= r.pressureDrop();
-                        h = r.enthalpyOut();
-                        if (p <= 0.2 * reference) {
-                            throw CoilSetup.tooMuchFlow(massFlow, n, 80);
-                        }
-                    }
-                    TubeCoilModelMarch.Point last = march.point(p, h);
-                    if (ti < path.size() - 1) {
-                        p -= march.bendDrop(last, g, s.flow().diameter() * ZoneCoilModel.BEND_EQUIVALENT_DIAMETERS);
-                    }
-                    tubeStates.add(new TubeState(ci, t, start.temperature(), last.temperature(), start.reportedQuality(),
-                            last.reportedQuality(), airInSum / massSum, airOutSum / massSum, tubeDuty));
-                    duty += tubeDuty;
+                if (marched.get(ci) instanceof RuntimeException e) {
+                    throw e;
                 }
-                newDrop[ci] = pIn - p;
-                pInAll[ci] = pIn;
-                pOutAll[ci] = p;
-                hOutAll[ci] = h;
-                dutyAll[ci] = duty;
+                CircuitPass cp = (CircuitPass) marched.get(ci);
+                newDrop[ci] = cp.drop;
+                pInAll[ci] = cp.inletPressure;
+                pOutAll[ci] = cp.outletPressure;
+                hOutAll[ci] = cp.outletEnthalpy;
+                dutyAll[ci] = cp.duty;
+                airChange = Math.max(airChange, cp.airChange);
+                charge += cp.charge;
+                resistanceSum += cp.resistanceSum;
+                tubeStates.addAll(cp.tubeStates);
                 double change = Math.abs(newDrop[ci] - drop[ci]) / Math.max(1.0, 1e-4 * newDrop[ci]);
                 pressureChange = Math.max(pressureChange, change);
                 // averaged with the last estimate: the drop falls as the inlet pressure (and so the
                 // saturation temperature) rises, and the plain update can swing from pass to pass
                 drop[ci] = drop[ci] == 0 || !evaporator ? newDrop[ci] : 0.5 * (drop[ci] + newDrop[ci]);
             }
+            MoistAirState[][][] last = airState;
+            airState = airNext;
+            airNext = last;
             return new Pass(airChange, pressureChange, newDrop, pOutAll, hOutAll, pInAll, dutyAll, charge,
                     tubeStates.toArray(TubeState[]::new), tubes * segments / resistanceSum);
+        }
+
+        private CircuitPass marchCircuit(int ci, double massFlow, double hIn) {
+            List<Circuiting.Tube> path = circuits.get(ci);
+            double m = massFlow * share[ci];
+            double g = m / s.tubeFlowArea();
+            double pIn = evaporator ? reference + drop[ci] : reference;
+            march.startCircuit(ci);
+            double p = pIn;
+            double h = hIn;
+            double duty = 0;
+            double airChange = 0;
+            double charge = 0;
+            double resistanceSum = 0;
+            List<TubeState> states = new ArrayList<>(path.size());
+            for (int ti = 0, tubeIndex = firstTube[ci]; ti < path.size(); ti++, tubeIndex++) {
+                Circuiting.Tube t = path.get(ti);
+                boolean forward = ti % 2 == 0;
+                TubeCoilModelMarch.Point start = march.point(p, h);
+                double tubeDuty = 0;
+                double airInSum = 0;
+                double airOutSum = 0;
+                double massSum = 0;
+                double mAirSegment = air.massFlow() * profile[t.position()] / ((double) places * segments);
+                for (int step = 0; step < segments; step++) {
+                    int k = forward ? step : segments - 1 - step;
+                    int slot = tubeIndex * segments + step;
+                    MoistAirState in = airState[t.row()][t.position()][k];
+                    TubeCoilModelMarch.Result r = march.segment(ci, slot, surfaces[t.position()], fraction, in,
+                            mAirSegment, p, h, m, g, segmentLength, segmentInsideArea);
+                    MoistAirState old = airState[t.row() + 1][t.position()][k];
+                    MoistAirState next = r.airOut();
+                    // on enthalpy: a surface switching between wet and dry moves the leaving air's
+                    // dry bulb and humidity by a step but its enthalpy (the heat) hardly at all
+                    airChange = Math.max(airChange, Math.abs(old.enthalpy() - next.enthalpy()) / CP_AIR);
+                    airNext[t.row() + 1][t.position()][k] = next;
+                    airInSum += mAirSegment * in.dryBulb();
+                    airOutSum += mAirSegment * next.dryBulb();
+                    massSum += mAirSegment;
+                    tubeDuty += r.heat();
+                    charge += r.chargeDensity() * segmentVolume;
+                    resistanceSum += 1 / r.insideCoefficient();
+                    p -= r.pressureDrop();
+                    h = r.enthalpyOut();
+                    if (p <= 0.2 * reference) {
+                        throw CoilSetup.tooMuchFlow(massFlow, circuits.size(), 80);
+                    }
+                }
+                TubeCoilModelMarch.Point end = march.point(p, h);
+                if (ti < path.size() - 1) {
+                    p -= march.bendDrop(end, g, s.flow().diameter() * ZoneCoilModel.BEND_EQUIVALENT_DIAMETERS);
+                }
+                states.add(new TubeState(ci, t, start.temperature(), end.temperature(), start.reportedQuality(),
+                        end.reportedQuality(), airInSum / massSum, airOutSum / massSum, tubeDuty));
+                duty += tubeDuty;
+            }
+            return new CircuitPass(pIn - p, pIn, p, h, duty, airChange, charge, resistanceSum, states);
         }
 
         /** @return heat given up by the air, from the entering and the leaving face [W] */

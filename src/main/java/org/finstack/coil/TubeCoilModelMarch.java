@@ -1,7 +1,8 @@
 package org.finstack.coil;
 
-import java.util.HashMap;
+import java.util.Arrays;
 import java.util.Map;
+import java.util.concurrent.ConcurrentHashMap;
 import org.finstack.core.Warnings;
 import org.finstack.fluid.Fluid;
 import org.finstack.fluid.FluidState;
@@ -23,7 +24,9 @@ import org.finstack.tubeside.SaturatedProperties;
  * Friedel 1979 two-phase friction, Rouhani &amp; Axelsson 1970 void fraction); they are called
  * here with the cached saturated properties so that a pass does not recompute them.
  *
- * <p>Working state of one rating only (the caches); not shared between ratings or threads.
+ * <p>Working state of one rating only (the caches), not shared between ratings. The circuits of a
+ * pass may be marched on separate threads at once: what a segment keeps is per segment slot or per
+ * circuit, and the saturation grid is a concurrent map of immutable nodes.
  */
 final class TubeCoilModelMarch {
 
@@ -50,12 +53,12 @@ final class TubeCoilModelMarch {
     private final Fluid fluid;
     private final RefrigerantFlow flow;
     private final boolean evaporator;
-    private final Map<Integer, Node> nodes = new HashMap<>();
+    private final Map<Integer, Node> nodes = new ConcurrentHashMap<>();
     private final double gridOrigin;
     /** Heat flux every segment's film-coefficient iteration starts from [W/m2]. */
     private double startFlux = 5000;
-    /** Heat flux the next two-phase segment of the circuit being marched starts from [W/m2]. */
-    private double circuitFlux = 5000;
+    /** Per circuit, the heat flux its next two-phase segment starts from [W/m2]. */
+    private final double[] circuitFlux;
     private final boolean[] frost;
     /** Per segment, the last single-phase state the fluid computed at its inlet. */
     private final FluidState[] lastState;
@@ -75,15 +78,19 @@ final class TubeCoilModelMarch {
      * @param flow       the in-tube model (diameter, override, duty)
      * @param evaporator whether the refrigerant takes heat up
      * @param slots      number of segments in the coil
+     * @param circuits   number of circuits
      * @param gridOrigin a pressure on the saturation grid [Pa]
      */
-    TubeCoilModelMarch(Fluid fluid, RefrigerantFlow flow, boolean evaporator, int slots, double gridOrigin) {
+    TubeCoilModelMarch(Fluid fluid, RefrigerantFlow flow, boolean evaporator, int slots, int circuits,
+            double gridOrigin) {
         this.fluid = fluid;
         this.flow = flow;
         this.evaporator = evaporator;
         this.gridOrigin = gridOrigin;
         this.frost = new boolean[slots];
         this.lastState = new FluidState[slots];
+        this.circuitFlux = new double[circuits];
+        Arrays.fill(circuitFlux, startFlux);
     }
 
     /**
@@ -97,16 +104,18 @@ final class TubeCoilModelMarch {
      */
     void primeFlux(double heatFlux) {
         startFlux = Math.max(100, heatFlux);
-        circuitFlux = startFlux;
+        Arrays.fill(circuitFlux, startFlux);
     }
 
     /**
      * Starts a circuit's march: its first two-phase segment's film-coefficient iteration starts
      * from the primed flux, every later one from the flux its predecessor in the circuit settled
      * at (so a segment's result depends only on what the march brings to it in this pass).
+     *
+     * @param circuit the circuit's index
      */
-    void startCircuit() {
-        circuitFlux = startFlux;
+    void startCircuit(int circuit) {
+        circuitFlux[circuit] = startFlux;
     }
 
     /** @return whether water froze on any segment in the last pass */
@@ -123,7 +132,8 @@ final class TubeCoilModelMarch {
     private final class Node {
         private final double pressure;
         private final SaturationState sat;
-        private SaturatedProperties props;
+        /** Made on demand; two threads may both make it, with the same result. */
+        private volatile SaturatedProperties props;
 
         Node(double pressure) {
             this.pressure = pressure;
@@ -131,16 +141,18 @@ final class TubeCoilModelMarch {
         }
 
         SaturatedProperties props() {
-            if (props == null) {
+            SaturatedProperties made = props;
+            if (made == null) {
                 FluidState l = sat.liquid();
                 FluidState v = sat.vapour();
                 TransportProperties t = fluid.transport();
-                props = new SaturatedProperties(fluid.name(), pressure, fluid.info().criticalPressure(),
+                made = new SaturatedProperties(fluid.name(), pressure, fluid.info().criticalPressure(),
                         fluid.info().molarMass(), l.density(), v.density(), t.viscosity(l), t.viscosity(v),
                         t.conductivity(l), t.conductivity(v), l.cp(), v.cp(), t.surfaceTension(l.temperature()),
                         v.enthalpy() - l.enthalpy());
+                props = made;
             }
-            return props;
+            return made;
         }
     }
 
@@ -360,6 +372,7 @@ final class TubeCoilModelMarch {
     /**
      * Rates one segment.
      *
+     * @param circuit      index of the circuit the segment belongs to
      * @param slot         segment index
      * @param surface      the coil's surfaces at this tube place's air-side coefficient
      * @param fraction     the segment's share of the coil's surfaces
@@ -373,7 +386,7 @@ final class TubeCoilModelMarch {
      * @param insideArea   segment inside area [m2]
      * @return the result
      */
-    Result segment(int slot, CoilSurface surface, double fraction, MoistAirState airIn, double airMassFlow,
+    Result segment(int circuit, int slot, CoilSurface surface, double fraction, MoistAirState airIn, double airMassFlow,
             double pressure, double enthalpy, double massFlow, double massFlux, double length, double insideArea) {
         Warnings w = Warnings.discard();
         Saturation s = saturation(pressure);
@@ -391,7 +404,7 @@ final class TubeCoilModelMarch {
         for (int part = 0; part < MAX_PARTS && remaining > 1e-12; part++) {
             double cap = capacity(cur, massFlow);
             double share = remaining;
-            double hi = insideCoefficient(cur, cur.quality(), massFlux, fluxDependent(cur) ? circuitFlux : startFlux, w);
+            double hi = insideCoefficient(cur, cur.quality(), massFlux, fluxDependent(cur) ? circuitFlux[circuit] : startFlux, w);
             SegmentExchange.Result x = SegmentExchange.exchange(surface, fraction * share, airIn, airMassFlow * share,
                     cur.temperature(), cap, hi, w);
             for (int i = 0; i < FLUX_ITERATIONS && fluxDependent(cur); i++) {
@@ -400,7 +413,7 @@ final class TubeCoilModelMarch {
                 double q = Math.abs(x.heat()) / (insideArea * share);
                 double xMid = Math.min(1, Math.max(0, cur.quality() + 0.5 * x.heat() / (massFlow * s.latentHeat())));
                 double next = insideCoefficient(cur, xMid, massFlux, q, w);
-                circuitFlux = Math.max(100, q);
+                circuitFlux[circuit] = Math.max(100, q);
                 if (Math.abs(next - hi) <= FLUX_TOLERANCE * hi) {
                     break;
                 }

@@ -166,6 +166,26 @@ class TubeCoilModelTest {
     }
 
     @Test
+    void circuitsMarchedInParallelGiveTheSameRatingEveryTime() {
+        // invariant of the parallel march: a rating does not depend on which thread marched which
+        // circuit; here circuit 2 takes the air circuit 1 leaves, the case where an order could leak in
+        CoilGeometry g = coil(2, 4, 2, 1.2);
+        Circuiting crossed = Circuiting.parse(2, 4, List.of(List.of("1-1", "1-2", "1-3", "1-4"),
+                List.of("2-4", "2-3", "2-2", "2-1")));
+        CoilCase base = evaporatorCase(g, "R134a", new Target.Superheat(5), 4, 0.6);
+        CoilCase c = new CoilCase(g, base.air(), base.refrigerant(), FoulingResistances.NONE, crossed, List.of());
+        Rating first = new TubeCoilModel().rate(c);
+        for (int i = 0; i < 6; i++) {
+            Rating again = new TubeCoilModel().rate(c);
+            assertThat(again.capacity()).isEqualTo(first.capacity());
+            assertThat(again.refrigerant().massFlow()).isEqualTo(first.refrigerant().massFlow());
+            assertThat(again.tubes()).isEqualTo(first.tubes());
+        }
+        // conservation of energy (product issue: within 0.1 %)
+        assertThat(Math.abs(first.refrigerant().energyBalanceError())).isLessThan(1e-3);
+    }
+
+    @Test
     void requiredCapacityIsMetBySolvingTheSaturationTemperature() {
         // the target the user set, with the superheat held
         Rating r = new TubeCoilModel().rate(evaporatorCase(coil(3, 4, 2, 1.2), "R134a", new Target.Capacity(1500, 5), 4,
