@@ -86,6 +86,7 @@ class MessagesCatalogueTest {
                 "airPressureDrop", "airflow", "ua", "finEfficiency", "metalMass")) {
             keys.add("compare.row." + k);
         }
+        SearchPanel.COLUMNS.forEach(k -> keys.add("study.search.column." + k));
         assertThat(keys).allMatch(Messages::has, "present in Messages.properties");
     }
 
