@@ -255,6 +255,7 @@ public final class WorkbenchFrame extends JFrame {
         file.addSeparator();
         file.add(importAction);
         file.add(exportDrawingAction);
+        file.add(ReportExport.menuItem(this, model, this::bandSettings, status::setText));
         file.addSeparator();
         file.add(quitAction);
         JMenu edit = new JMenu(Messages.get("menu.edit"));
