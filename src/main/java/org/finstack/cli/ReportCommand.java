@@ -5,14 +5,11 @@ import java.nio.file.Path;
 import java.util.concurrent.Callable;
 import org.finstack.core.InputException;
 import org.finstack.core.Msg;
-import org.finstack.report.HtmlReport;
-import org.finstack.report.PdfReport;
-import org.finstack.report.Summary;
 import org.finstack.io.ProjectFiles;
+import org.finstack.report.ProjectReport;
+import org.finstack.report.Summary;
 import org.finstack.study.Progress;
 import org.finstack.study.Project;
-import org.finstack.study.compare.BandSettings;
-import org.finstack.study.compare.Comparison;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Mixin;
@@ -58,16 +55,15 @@ final class ReportCommand implements Callable<Integer> {
         }
         var system = Output.system(units);
         Project project = ProjectFiles.read(projectFile);
-        Comparison c = Comparison.of(project, CompareCommand.basis(project, designTemperature),
-                band.settings(), Progress.NONE);
-        Summary s = Summary.of(c, system);
+        Summary s = ProjectReport.summary(project, CompareCommand.basis(project, designTemperature),
+                band.settings(), system, Progress.NONE);
         PrintWriter out = spec.commandLine().getOut();
         if (pdf != null) {
-            PdfReport.write(s, pdf);
+            ProjectReport.write(s, pdf, ProjectReport.Kind.PDF);
             out.println("wrote " + pdf);
         }
         if (html != null) {
-            HtmlReport.write(s, html);
+            ProjectReport.write(s, html, ProjectReport.Kind.HTML);
             out.println("wrote " + html);
         }
         return 0;

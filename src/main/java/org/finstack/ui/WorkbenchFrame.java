@@ -183,6 +183,8 @@ public final class WorkbenchFrame extends JFrame {
         tabs.addTab(Messages.get("tab.coilMap"), coilMap);
         tabs.addTab(Messages.get("tab.compare"), compare);
         tabs.addTab(Messages.get("tab.sweeps"), sweep);
+        tabs.addTab(Messages.get("study.tab.search"), new SearchPanel(model));
+        tabs.addTab(Messages.get("study.tab.sensitivity"), new SensitivityPanel(model));
         JPanel right = new JPanel(new BorderLayout());
         JPanel summaryRow = new JPanel(new BorderLayout());
         summaryRow.setBorder(BorderFactory.createCompoundBorder(BorderFactory.createMatteBorder(0, 0, 1, 0,
@@ -253,6 +255,7 @@ public final class WorkbenchFrame extends JFrame {
         file.addSeparator();
         file.add(importAction);
         file.add(exportDrawingAction);
+        file.add(ReportExport.menuItem(this, model, this::bandSettings, status::setText));
         file.addSeparator();
         file.add(quitAction);
         JMenu edit = new JMenu(Messages.get("menu.edit"));

@@ -86,6 +86,11 @@ class MessagesCatalogueTest {
                 "airPressureDrop", "airflow", "ua", "finEfficiency", "metalMass")) {
             keys.add("compare.row." + k);
         }
+        for (org.finstack.study.explain.Sensitivity.Input in : org.finstack.study.explain.Sensitivity.Input.values()) {
+            keys.add("study.sensitivity.input." + in.name());
+        }
+        SearchPanel.COLUMNS.forEach(k -> keys.add("study.search.column." + k));
+        SensitivityPanel.COLUMNS.forEach(k -> keys.add("study.sensitivity.column." + k));
         assertThat(keys).allMatch(Messages::has, "present in Messages.properties");
     }
 

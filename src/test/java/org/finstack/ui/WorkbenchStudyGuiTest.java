@@ -1,0 +1,275 @@
+package org.finstack.ui;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.junit.jupiter.api.Assumptions.assumeFalse;
+
+import java.awt.Graphics2D;
+import java.awt.GraphicsEnvironment;
+import java.awt.image.BufferedImage;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.UUID;
+import java.util.concurrent.Callable;
+import java.util.prefs.BackingStoreException;
+import java.util.prefs.Preferences;
+import javax.imageio.ImageIO;
+import javax.swing.JTable;
+import javax.swing.SwingWorker;
+import org.apache.pdfbox.Loader;
+import org.apache.pdfbox.pdmodel.PDDocument;
+import org.apache.pdfbox.text.PDFTextStripper;
+import org.assertj.swing.edt.FailOnThreadViolationRepaintManager;
+import org.assertj.swing.edt.GuiActionRunner;
+import org.assertj.swing.fixture.FrameFixture;
+import org.assertj.swing.timing.Condition;
+import org.assertj.swing.timing.Pause;
+import org.assertj.swing.timing.Timeout;
+import org.finstack.coil.CoilModels;
+import org.finstack.coil.Rating;
+import org.finstack.report.ProjectReport;
+import org.finstack.study.Progress;
+import org.finstack.study.Project;
+import org.finstack.study.compare.BandSettings;
+import org.finstack.study.explain.Explanation;
+import org.finstack.study.explain.Sensitivity;
+import org.finstack.study.search.CandidateResult;
+import org.finstack.study.search.CandidateSearch;
+import org.finstack.study.search.SearchResult;
+import org.finstack.ui.draw.Tornado;
+import org.finstack.units.Dimension;
+import org.finstack.units.Quantities;
+import org.finstack.units.UnitSystem;
+import org.junit.jupiter.api.AfterEach;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * The workbench's studies, driven as a user would on the demo project: the candidate search
+ * lists the same ranking as study.search run directly, its first row's capacity is that of a
+ * single rating of the candidate, Cancel stops it, and the chosen candidate becomes a new option
+ * (undone by Undo); a bad limit is refused naming the field; the sensitivity tab's tornado holds
+ * the inputs largest effect first, its first bar the largest effect of study.explain run
+ * directly; File &gt; Export report writes a one-page PDF with the existing coil's name in it, and a
+ * file that cannot be written is told in a dialog with the reason. A repaint manager fails any
+ * Swing access off the event thread. Skipped without a display (CI runs it under Xvfb).
+ */
+class WorkbenchStudyGuiTest {
+
+    private static final int SEARCH_TAB = 6;
+    private static final int SENSITIVITY_TAB = 7;
+    private static final Path SHOTS = Path.of("target", "screenshots");
+
+    @TempDir
+    Path dir;
+
+    private Preferences node;
+    private WorkbenchFrame frame;
+    private FrameFixture window;
+
+    @BeforeAll
+    static void needsDisplay() {
+        assumeFalse(GraphicsEnvironment.isHeadless(), "no display: GUI tests skipped (CI runs them under Xvfb)");
+        FailOnThreadViolationRepaintManager.install();
+    }
+
+    @BeforeEach
+    void open() {
+        node = Preferences.userRoot().node("org/finstack/test-" + UUID.randomUUID());
+        UiPreferences prefs = new UiPreferences(node);
+        frame = GuiActionRunner.execute(() -> Workbench.open(Workbench.demo(), null, prefs, false));
+        window = new FrameFixture(frame);
+        window.resizeTo(new java.awt.Dimension(1280, 820));
+        awaitCondition("rating finished", () -> !frame.busy() && frame.results().rating() != null);
+    }
+
+    @AfterEach
+    void close() throws BackingStoreException {
+        if (window != null) {
+            assertThat(onEdt(() -> frame.runner().ratingsOnEventThread())).as("ratings run on the event thread")
+                    .isZero();
+            window.cleanUp();
+        }
+        if (node != null) {
+            node.removeNode();
+        }
+    }
+
+    @Test
+    void searchListsTheRankingAndAddsTheChosenCandidateAsAnOption() {
+        assertThat(onEdt(() -> frame.tabs().getTitleAt(SEARCH_TAB))).isEqualTo(Messages.get("study.tab.search"));
+        window.tabbedPane("tabs").selectTab(SEARCH_TAB);
+        SearchPanel panel = (SearchPanel) window.panel("study.search").target();
+        window.textBox("study.search.limit").setText("5");
+        window.button("study.search.run").click();
+        awaitCondition("searched", () -> !panel.running() && panel.result() != null);
+        // the reference: study.search run directly on the same project, and one candidate rated alone
+        Project p = Workbench.demo();
+        SearchResult expected = CandidateSearch.run(p, Progress.NONE);
+        List<CandidateResult> shown = onEdt(panel::shown);
+        assertThat(shown).extracting(c -> c.candidate().name()).containsExactlyElementsOf(
+                expected.candidates().subList(0, 5).stream().map(c -> c.candidate().name()).toList());
+        CandidateResult first = expected.candidates().get(0);
+        Rating alone = CoilModels.rate(p.conditions().caseFor(first.candidate().coil()));
+        assertThat(shown.get(0).capacity()).isEqualTo(first.capacity()).isEqualTo(alone.capacity());
+        JTable table = window.table("study.search.table").target();
+        window.table("study.search.table").requireRowCount(5);
+        assertThat(cell(table, 0, "candidate")).isEqualTo(first.candidate().name());
+        assertThat(cell(table, 0, "capacity")).isEqualTo(Quantities.format(alone.capacity(), Dimension.HEAT_FLOW,
+                UnitSystem.SI));
+        assertThat(cell(table, 0, "airPressureDrop")).isEqualTo(Quantities.format(alone.airPressureDrop(),
+                Dimension.PRESSURE_DIFFERENCE, UnitSystem.SI));
+        assertThat(cell(table, 0, "meets")).isEqualTo(Messages.get(first.meetsRequirement() ? "study.search.yes"
+                : "study.search.no"));
+        assertThat(cell(table, 0, "mass")).isEqualTo(Quantities.format(alone.geometry().metalMass(), Dimension.MASS,
+                UnitSystem.SI));
+        for (int r = 0; r < 5; r++) {
+            for (int c = 0; c < table.getColumnCount(); c++) {
+                int row = r;
+                int col = c;
+                assertThat(onEdt(() -> table.getValueAt(row, col).toString())).doesNotContain("NaN");
+            }
+        }
+        window.label("study.search.requirement").requireText(Messages.format("study.search.requirement",
+                Quantities.format(expected.requirement().capacity(), Dimension.HEAT_FLOW, UnitSystem.SI),
+                expected.requirement().basis()));
+        shot("15-search");
+        window.button("study.search.add").requireDisabled();
+        window.table("study.search.table").selectRows(0);
+        window.button("study.search.add").click();
+        awaitCondition("added", () -> frame.model().project().allOptions().size() == 3);
+        assertThat(onEdt(() -> frame.model().option().name())).isEqualTo(first.candidate().name());
+        assertThat(onEdt(() -> frame.model().option().coil())).isEqualTo(first.candidate().coil());
+        assertThat(onEdt(() -> frame.model().dirty())).isTrue();
+        window.button("toolbar.undo").click();
+        awaitCondition("undone", () -> frame.model().project().allOptions().size() == 2);
+    }
+
+    @Test
+    void cancelStopsTheSearchAndListsNothing() {
+        window.tabbedPane("tabs").selectTab(SEARCH_TAB);
+        SearchPanel panel = (SearchPanel) window.panel("study.search").target();
+        GuiActionRunner.execute(() -> {
+            panel.run();
+            panel.cancel();
+        });
+        awaitCondition("stopped", () -> !panel.running());
+        awaitCondition("no search thread left", () -> Thread.getAllStackTraces().keySet().stream()
+                .noneMatch(t -> t.getName().equals("finstack-search") && t.isAlive()));
+        assertThat(onEdt(panel::result)).isNull();
+        window.label("study.search.status").requireText(Messages.get("study.search.cancelled"));
+        window.button("study.search.run").requireEnabled();
+        window.button("study.search.cancel").requireDisabled();
+    }
+
+    @Test
+    void aBadLimitIsRefusedNamingTheField() {
+        window.tabbedPane("tabs").selectTab(SEARCH_TAB);
+        SearchPanel panel = (SearchPanel) window.panel("study.search").target();
+        window.textBox("study.search.limit").setText("-3");
+        window.button("study.search.run").click();
+        assertThat(onEdt(panel::running)).isFalse();
+        String status = window.label("study.search.status").text();
+        assertThat(status).contains("study.search.limit").doesNotContain("Exception");
+        window.textBox("study.search.limit").setText("lots");
+        window.button("study.search.run").click();
+        assertThat(window.label("study.search.status").text()).contains("study.search.limit");
+        assertThat(onEdt(panel::result)).isNull();
+    }
+
+    @Test
+    void sensitivityTornadoPutsTheLargestEffectFirst() {
+        assertThat(onEdt(() -> frame.tabs().getTitleAt(SENSITIVITY_TAB)))
+                .isEqualTo(Messages.get("study.tab.sensitivity"));
+        window.tabbedPane("tabs").selectTab(SENSITIVITY_TAB);
+        SensitivityPanel panel = (SensitivityPanel) window.panel("study.sensitivity").target();
+        window.button("study.sensitivity.run").click();
+        awaitCondition("stepped", () -> !panel.running() && panel.result() != null);
+        Sensitivity.Result expected = Sensitivity.of(Workbench.demo().caseOf(0));
+        List<Tornado.Bar> bars = onEdt(panel::bars);
+        assertThat(bars).hasSize((int) expected.effects().stream().filter(Sensitivity.Effect::rated).count());
+        for (int i = 1; i < bars.size(); i++) {
+            assertThat(Math.abs(bars.get(i).value())).isLessThanOrEqualTo(Math.abs(bars.get(i - 1).value()));
+        }
+        Sensitivity.Effect largest = expected.effects().get(0);
+        assertThat(bars.get(0).label()).isEqualTo(SensitivityPanel.label(largest.input()));
+        assertThat(bars.get(0).value()).isEqualTo(100 * largest.capacityFraction());
+        window.table("study.sensitivity.table").requireRowCount(expected.effects().size());
+        assertThat(window.textBox("study.sensitivity.explanation").text())
+                .contains(Explanation.forCoil(expected).get(0));
+        shot("16-sensitivity");
+    }
+
+    @Test
+    void exportReportWritesTheOnePagePdf() throws IOException {
+        window.menuItem("menu.file.export").requireEnabled();
+        Path pdf = dir.resolve("c2-report.pdf");
+        String[] status = new String[1];
+        SwingWorker<Path, Void> w = onEdt(() -> ReportExport.write(frame, frame.model().project(),
+                UnitSystem.SI, BandSettings.DEFAULT, pdf, ReportExport.kindOf(pdf, ProjectReport.Kind.HTML),
+                s -> status[0] = s));
+        awaitCondition("written", w::isDone);
+        assertThat(pdf).exists();
+        try (PDDocument doc = Loader.loadPDF(pdf.toFile())) {
+            assertThat(doc.getNumberOfPages()).isEqualTo(1);
+            String text = new PDFTextStripper().getText(doc).replace('\u00a0', ' ');
+            assertThat(text).contains(onEdt(() -> frame.model().project().existing().name()));
+        }
+        assertThat(onEdt(() -> status[0])).isEqualTo(Messages.format("menu.file.export.written", pdf));
+    }
+
+    @Test
+    void aReportThatCannotBeWrittenIsToldInADialog() throws IOException {
+        Path blocker = Files.writeString(dir.resolve("not-a-folder"), "x");
+        Path html = blocker.resolve("report.html");
+        onEdt(() -> ReportExport.write(frame, frame.model().project(), UnitSystem.SI, BandSettings.OFF, html,
+                ReportExport.kindOf(html, ProjectReport.Kind.PDF), s -> { }));
+        var pane = window.optionPane(Timeout.timeout(15_000));
+        pane.requireErrorMessage();
+        String message = onEdt(() -> pane.target().getMessage().toString());
+        assertThat(message).startsWith(Messages.format("menu.file.export.failed", html, "").strip())
+                .doesNotContain("\tat ").doesNotContain("Exception");
+        pane.okButton().click();
+        assertThat(Files.isRegularFile(html)).isFalse();
+        assertThat(Files.readString(blocker)).isEqualTo("x");
+    }
+
+    // --- helpers ---
+
+    private static String cell(JTable t, int row, String column) {
+        return onEdt(() -> t.getValueAt(row, SearchPanel.COLUMNS.indexOf(column)).toString());
+    }
+
+    private void awaitCondition(String what, Callable<Boolean> test) {
+        Pause.pause(new Condition(what) {
+            @Override
+            public boolean test() {
+                return onEdt(test);
+            }
+        }, Timeout.timeout(60_000));
+    }
+
+    private static <T> T onEdt(Callable<T> c) {
+        return GuiActionRunner.execute(c);
+    }
+
+    private void shot(String name) {
+        try {
+            Files.createDirectories(SHOTS);
+            BufferedImage img = GuiActionRunner.execute(() -> {
+                BufferedImage i = new BufferedImage(frame.getRootPane().getWidth(), frame.getRootPane().getHeight(),
+                        BufferedImage.TYPE_INT_RGB);
+                Graphics2D g = i.createGraphics();
+                frame.getRootPane().paint(g);
+                g.dispose();
+                return i;
+            });
+            ImageIO.write(img, "png", SHOTS.resolve(name + ".png").toFile());
+        } catch (IOException e) {
+            throw new AssertionError("cannot write screenshot " + name, e);
+        }
+    }
+}
