@@ -3,6 +3,7 @@ package org.finstack.coil;
 import java.util.Arrays;
 import java.util.Map;
 import java.util.concurrent.ConcurrentHashMap;
+import java.util.concurrent.atomic.AtomicReferenceArray;
 import org.finstack.core.Warnings;
 import org.finstack.fluid.Fluid;
 import org.finstack.fluid.FluidState;
@@ -26,7 +27,7 @@ import org.finstack.tubeside.SaturatedProperties;
  *
  * <p>Working state of one rating only (the caches), not shared between ratings. The circuits of a
  * pass may be marched on separate threads at once: what a segment keeps is per segment slot or per
- * circuit, and the saturation grid is a concurrent map of immutable nodes.
+ * circuit, and the saturation grid holds immutable nodes made once each (an atomic array near the reference pressure, a concurrent map beyond).
  */
 final class TubeCoilModelMarch {
 
@@ -50,10 +51,16 @@ final class TubeCoilModelMarch {
     static final double REUSE_RELATIVE_PRESSURE = 1e-5;
     static final double REUSE_ENTHALPY = 0;
 
+    /** Nodes on either side of the grid origin held in an array. */
+    private static final int NEAR_NODES = 1700;
+
     private final Fluid fluid;
     private final RefrigerantFlow flow;
     private final boolean evaporator;
-    private final Map<Integer, Node> nodes = new ConcurrentHashMap<>();
+    /** Grid nodes i in [-{@value #NEAR_NODES}, {@value #NEAR_NODES}] (p_ref / 5.5 to 5.5 p_ref), made once each when first asked for. */
+    private final AtomicReferenceArray<Node> nearNodes = new AtomicReferenceArray<>(2 * NEAR_NODES + 1);
+    /** Nodes further out. */
+    private final Map<Integer, Node> farNodes = new ConcurrentHashMap<>();
     private final double gridOrigin;
     /** Heat flux every segment's film-coefficient iteration starts from [W/m2]. */
     private double startFlux = 5000;
@@ -157,7 +164,20 @@ final class TubeCoilModelMarch {
     }
 
     private Node node(int i) {
-        return nodes.computeIfAbsent(i, k -> new Node(gridOrigin * Math.pow(1 + TubeCoilModel.SATURATION_GRID_STEP, k)));
+        if (Math.abs(i) > NEAR_NODES) {
+            return farNodes.computeIfAbsent(i, this::newNode);
+        }
+        Node n = nearNodes.get(i + NEAR_NODES);
+        if (n == null) {
+            // two threads may make the same node; the first one stored is kept by both
+            nearNodes.compareAndSet(i + NEAR_NODES, null, newNode(i));
+            n = nearNodes.get(i + NEAR_NODES);
+        }
+        return n;
+    }
+
+    private Node newNode(int i) {
+        return new Node(gridOrigin * Math.pow(1 + TubeCoilModel.SATURATION_GRID_STEP, i));
     }
 
     /**
