@@ -105,8 +105,9 @@ public final class SegmentExchange {
         double ao = s.derived().airSideArea() * fraction;
         double hsR = Psychrometrics.saturatedEnthalpy(tR, p);
         double coatingR = s.coil().coating() == null ? 0 : s.coil().coating().resistance(s.coil().coatingThickness());
-        // the effective surface temperature solves g(T) = T_eff(T) - T = 0; g falls with T. Plain
-        // substitution first, then secant steps kept inside the bracket the signs of g give
+        // the effective surface temperature solves h_s(T) = h_s,eff(T), written g(T) = 0 below; g
+        // falls with T. Plain substitution first, then secant steps kept inside the bracket the
+        // signs of g give
         double tS = tSurfaceStart;
         double below = Double.NEGATIVE_INFINITY;
         double above = Double.POSITIVE_INFINITY;
@@ -127,8 +128,10 @@ public final class SegmentExchange {
             double hOut = hIn - q / mAir;
             double ntuO = 1 / (filmSide * mAir);
             double hsEff = hIn - (hIn - hOut) / -Math.expm1(-ntuO);
-            double tEff = newtonFrom(tS, hsS, bW, hsEff, p, tR, airIn.dryBulb());
-            double g = tEff - tS;
+            // g = one Newton step of the inversion h_s(T_eff) = h_s,eff from T: zero exactly where
+            // the full inversion's is (h_s(T) = h_s,eff), of the same sign, and equal to it near there
+            double g = (hsEff - hsS) / bW;
+            double tEff = tS + g;
             if (Math.abs(g) <= TOLERANCE_K) {
                 double wEff = Psychrometrics.saturationHumidityRatio(tEff, p);
                 double wOut = Math.max(wEff, Math.min(wIn, wEff + (wIn - wEff) * Math.exp(-ntuO)));
@@ -147,7 +150,7 @@ public final class SegmentExchange {
             } else {
                 above = Math.min(above, tS);
             }
-            double next = tEff;
+            double next = Math.min(airIn.dryBulb() + 1, Math.max(tR - 1, tEff));
             if (!Double.isNaN(lastG) && g != lastG) {
                 next = tS - g * (tS - lastT) / (g - lastG);
             }
@@ -183,19 +186,11 @@ public final class SegmentExchange {
      * @return [K]
      */
     static double temperatureOfSaturatedEnthalpy(double h, double p, double low, double high, double guess) {
-        double t = Math.min(high + 1, Math.max(low - 1, guess));
-        return newtonFrom(t, Psychrometrics.saturatedEnthalpy(t, p), Psychrometrics.saturatedEnthalpySlope(t, p), h, p,
-                low, high);
-    }
-
-    /** As {@link #temperatureOfSaturatedEnthalpy}, from a first trial whose h_s and slope are known. */
-    private static double newtonFrom(double t0, double hs0, double slope0, double h, double p, double low,
-            double high) {
         double lo = low - 1;
         double hi = high + 1;
-        double t = Math.min(hi, Math.max(lo, t0));
-        double hs = t == t0 ? hs0 : Psychrometrics.saturatedEnthalpy(t, p);
-        double slope = t == t0 ? slope0 : Psychrometrics.saturatedEnthalpySlope(t, p);
+        double t = Math.min(hi, Math.max(lo, guess));
+        double hs = Psychrometrics.saturatedEnthalpy(t, p);
+        double slope = Psychrometrics.saturatedEnthalpySlope(t, p);
         for (int i = 0; i < 200; i++) {
             double f = hs - h;
             if (f < 0) {
