@@ -183,6 +183,8 @@ public final class WorkbenchFrame extends JFrame {
         tabs.addTab(Messages.get("tab.coilMap"), coilMap);
         tabs.addTab(Messages.get("tab.compare"), compare);
         tabs.addTab(Messages.get("tab.sweeps"), sweep);
+        tabs.addTab(Messages.get("field.tab.fouling"), new FoulingPanel(model));
+        tabs.addTab(Messages.get("field.tab.diagnosis"), new DiagnosisPanel(model));
         JPanel right = new JPanel(new BorderLayout());
         JPanel summaryRow = new JPanel(new BorderLayout());
         summaryRow.setBorder(BorderFactory.createCompoundBorder(BorderFactory.createMatteBorder(0, 0, 1, 0,
