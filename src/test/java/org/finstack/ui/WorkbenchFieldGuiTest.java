@@ -51,7 +51,7 @@ import org.junit.jupiter.api.Test;
  * gives for the same case, fan, deposit and levels run directly; a diagnosis of readings made from
  * a rating of the clean coil finds about no loss; a chill-room evaporator below 0 °C gets the frost
  * timeline {@link FrostStudy} gives; an impossible reading is refused with the
- * study's message naming the field. The reference values come from the study and the rating
+ * study's message naming the field; Cancel stops the work under way. The reference values come from the study and the rating
  * model run directly ({@link CoilModels#rate}) on the demo project's case. Skipped without a
  * display (CI runs it under Xvfb); screenshots go to target/screenshots.
  */
@@ -146,6 +146,38 @@ class WorkbenchFieldGuiTest {
                 .contains("pays back");
         assertThat(window.textBox("fouling.cautions").text()).contains("work at height");
         shot("15-fouling-and-frost");
+        // US units: the same numbers, shown in US units
+        window.toggleButton("units.US").click();
+        assertThat(cell(table, 5, "capacity")).isEqualTo(Quantities.format(e.get(5).capacity(), Dimension.HEAT_FLOW,
+                UnitSystem.US)).endsWith("Btu/h");
+        window.textBox("fouling.maxThickness").requireText(Quantities.format(0.12e-3, Dimension.LENGTH, UnitSystem.US));
+    }
+
+    @Test
+    void cancelStopsTheWorkUnderWayAndShowsNothing() throws InterruptedException {
+        window.tabbedPane("tabs").selectTab(Messages.get("field.tab.fouling"));
+        FoulingPanel panel = (FoulingPanel) window.panel("field.fouling").target();
+        java.util.concurrent.CountDownLatch started = new java.util.concurrent.CountDownLatch(1);
+        java.util.concurrent.atomic.AtomicBoolean sawCancel = new java.util.concurrent.atomic.AtomicBoolean();
+        java.util.concurrent.atomic.AtomicBoolean delivered = new java.util.concurrent.atomic.AtomicBoolean();
+        // work that runs until it is told to stop, as the studies do between their steps
+        GuiActionRunner.execute(() -> panel.runner().start(p -> {
+            started.countDown();
+            while (!p.cancelled()) {
+                Thread.onSpinWait();
+            }
+            sawCancel.set(true);
+            throw new java.util.concurrent.CancellationException("stopped");
+        }, r -> delivered.set(true), e -> delivered.set(true)));
+        assertThat(started.await(10, java.util.concurrent.TimeUnit.SECONDS)).isTrue();
+        window.button("fouling.run").requireDisabled();
+        window.button("fouling.cancel").click();
+        awaitCondition("cancelled", () -> !panel.runner().running());
+        window.label("fouling.status").requireText(Messages.get("field.status.cancelled"));
+        window.button("fouling.run").requireEnabled();
+        awaitCondition("the work saw Cancel", sawCancel::get);
+        assertThat(delivered.get()).isFalse();
+        assertThat(onEdt(panel::outcome)).isNull();
     }
 
     @Test
