@@ -115,7 +115,7 @@ final class FoulingPanel extends JPanel {
      * @param cleaningCost       price of one cleaning [currency]
      * @param otherSaturation    the plant's other saturation temperature [K]
      */
-    record CleaningInputs(double runHours, double pricePerKwh, String currency, double efficiency,
+    record PaybackInputs(double runHours, double pricePerKwh, String currency, double efficiency,
             double cleaningCost, double otherSaturation) {
     }
 
@@ -123,7 +123,6 @@ final class FoulingPanel extends JPanel {
      * Everything one run found.
      *
      * @param option       the option's name
-     * @param ratedCase    the case studied
      * @param choice       the fan chosen
      * @param curve        the fouling curve
      * @param paybacks     one payback per level of the curve, empty when the cleaning inputs were refused
@@ -132,7 +131,7 @@ final class FoulingPanel extends JPanel {
      * @param frostNote    why there is no frost march, or null
      * @param cautions     the cautions for the refrigerant
      */
-    record Outcome(String option, CoilCase ratedCase, FanChoice choice, FoulingStudy.FoulingCurve curve,
+    record Outcome(String option, FanChoice choice, FoulingStudy.FoulingCurve curve,
             List<CleaningPayback> paybacks, String paybackError, FrostStudy.FrostResult frost, String frostNote,
             List<String> cautions) {
     }
@@ -392,10 +391,10 @@ final class FoulingPanel extends JPanel {
             return;
         }
         double maxThickness;
-        CleaningInputs cleaning;
+        PaybackInputs cleaning;
         try {
             maxThickness = read(heaviest);
-            cleaning = new CleaningInputs(read(runHours), read(price), currency.getText().strip(), read(efficiency),
+            cleaning = new PaybackInputs(read(runHours), read(price), currency.getText().strip(), read(efficiency),
                     read(cleaningCost), read(otherSaturation));
         } catch (FinstackException e) {
             return;
@@ -446,7 +445,7 @@ final class FoulingPanel extends JPanel {
     }
 
     private static Outcome compute(String option, CoilCase c, FanChoice choice, List<Constraints.FanPoint> fanCurve,
-            double maxThickness, int n, double hours, CleaningInputs cleaning, Progress progress) {
+            double maxThickness, int n, double hours, PaybackInputs cleaning, Progress progress) {
         List<String> cautions = RatingRunner.cautions(c);
         CoilFan fan = fan(choice, fanCurve, c);
         boolean evaporator = c.refrigerant().duty() == Duty.EVAPORATOR;
@@ -489,7 +488,7 @@ final class FoulingPanel extends JPanel {
                 frostNote = e.getMessage();
             }
         }
-        return new Outcome(option, c, choice, curve, paybacks, paybackError, frost, frostNote, cautions);
+        return new Outcome(option, choice, curve, paybacks, paybackError, frost, frostNote, cautions);
     }
 
     /** A share of a progress: steps offset into the whole. */
@@ -692,10 +691,5 @@ final class FoulingPanel extends JPanel {
     /** @return the run controls */
     StudyRun runner() {
         return run;
-    }
-
-    /** @param c the fan to use (for tests and menus) */
-    void select(FanChoice c) {
-        fan.setSelectedItem(c);
     }
 }
