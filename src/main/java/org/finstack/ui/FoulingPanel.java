@@ -81,7 +81,7 @@ final class FoulingPanel extends JPanel {
      */
     static final double EC_SPEED_RESERVE = 1.3;
 
-    /** Time steps of the frost march. */
+    /** Time steps of the frost march; the {@code frost} command's default. */
     static final int FROST_STEPS = 24;
 
     private static final double KELVIN_AT_0C = 273.15; // exact by definition
@@ -140,6 +140,7 @@ final class FoulingPanel extends JPanel {
     private final JComboBox<FanChoice> fan = new JComboBox<>();
     private final JLabel fanNote = new JLabel();
     private final QuantityField heaviest = new QuantityField("fouling.maxThickness", Dimension.LENGTH, false);
+    // levels: the fouling command's default; hours: a starting span to follow the frost, a choice of this program
     private final JSpinner levels = new JSpinner(new SpinnerNumberModel(6, 2, 20, 1));
     private final JSpinner hours = new JSpinner(new SpinnerNumberModel(6.0, 0.5, 1000.0, 0.5));
     private final QuantityField runHours = new QuantityField("cleaning.runHours", Dimension.DIMENSIONLESS, false);
@@ -263,6 +264,8 @@ final class FoulingPanel extends JPanel {
         for (JSpinner sp : List.of(levels, hours)) {
             ((JSpinner.DefaultEditor) sp.getEditor()).getTextField().setColumns(4);
         }
+        // starting values of the invented demo readings (examples/measured/otterby-rooftop-condenser-measured.json),
+        // to be replaced by the site's own
         runHours.show(3000, UnitSystem.SI);
         price.show(0.20, UnitSystem.SI);
         efficiency.show(0.5, UnitSystem.SI);
