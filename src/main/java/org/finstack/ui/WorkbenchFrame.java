@@ -185,6 +185,8 @@ public final class WorkbenchFrame extends JFrame {
         tabs.addTab(Messages.get("tab.sweeps"), sweep);
         tabs.addTab(Messages.get("study.tab.search"), new SearchPanel(model));
         tabs.addTab(Messages.get("study.tab.sensitivity"), new SensitivityPanel(model));
+        tabs.addTab(Messages.get("field.tab.fouling"), new FoulingPanel(model));
+        tabs.addTab(Messages.get("field.tab.diagnosis"), new DiagnosisPanel(model));
         JPanel right = new JPanel(new BorderLayout());
         JPanel summaryRow = new JPanel(new BorderLayout());
         summaryRow.setBorder(BorderFactory.createCompoundBorder(BorderFactory.createMatteBorder(0, 0, 1, 0,

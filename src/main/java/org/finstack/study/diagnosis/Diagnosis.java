@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
+import java.util.concurrent.CancellationException;
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
 import org.apache.commons.math3.exception.TooManyEvaluationsException;
 import org.finstack.airside.AirSideCorrelation;
@@ -20,6 +21,7 @@ import org.finstack.core.ConvergenceException;
 import org.finstack.core.InputException;
 import org.finstack.core.Msg;
 import org.finstack.core.Warnings;
+import org.finstack.study.Progress;
 import org.finstack.study.cost.CarnotCop;
 import org.finstack.study.cost.CleaningCase;
 import org.finstack.study.cost.CleaningPayback;
@@ -126,6 +128,9 @@ public record Diagnosis(Measurements measurements, MeasuredDuty.Basis basis, Est
 
     private static final int MAX_EVALUATIONS = 60;
 
+    /** Stages a diagnosis reports: the nominal solution, seven readings' sensitivities, the j scatter. */
+    private static final int STAGES = 9;
+
     /** Copies the collections. */
     public Diagnosis {
         foulingBudget = Map.copyOf(foulingBudget);
@@ -143,11 +148,28 @@ public record Diagnosis(Measurements measurements, MeasuredDuty.Basis basis, Est
      * @return the diagnosis
      */
     public static Diagnosis of(CoilCase template, Measurements measurements, CleaningInputs cleaning) {
+        return of(template, measurements, cleaning, Progress.NONE);
+    }
+
+    /**
+     * Diagnoses a coil, reporting each stage done (the nominal solution, each reading's
+     * sensitivity, the correlation's scatter) and stopping between stages when asked.
+     *
+     * @param template     the coil, refrigerant and fouling parts (its air-side fouling must be zero:
+     *                     it is what is inferred)
+     * @param measurements the readings
+     * @param cleaning     payback inputs, or {@code null}
+     * @param progress     hears of each stage done; checked for cancellation between stages
+     * @return the diagnosis
+     * @throws CancellationException when {@code progress} asks to stop
+     */
+    public static Diagnosis of(CoilCase template, Measurements measurements, CleaningInputs cleaning,
+            Progress progress) {
         if (template.fouling().airSide() != 0) {
             throw new InputException("fouling.airSide", Msg.IMPOSSIBLE,
                     "is what diagnose infers from the readings; leave it out of a measurement file");
         }
-        return new Solver(template, measurements).run(cleaning);
+        return new Solver(template, measurements, progress).run(cleaning);
     }
 
     /** The outputs whose uncertainty is propagated. */
@@ -167,11 +189,22 @@ public record Diagnosis(Measurements measurements, MeasuredDuty.Basis basis, Est
         private final Measurements m;
         private final MeasuredDuty.Basis basis;
         private final Warnings warnings = new Warnings();
+        private final Progress progress;
+        private int stage;
 
-        Solver(CoilCase template, Measurements m) {
+        Solver(CoilCase template, Measurements m, Progress progress) {
             this.template = template;
             this.m = m;
             this.basis = MeasuredDuty.basis(m);
+            this.progress = progress;
+        }
+
+        /** Reports one more stage of {@link #STAGES} done, then stops if asked. */
+        private void stageDone() {
+            progress.step(++stage, STAGES);
+            if (progress.cancelled()) {
+                throw new CancellationException("diagnosis cancelled");
+            }
         }
 
         private Rating rate(Measurements readings, double fouling) {
@@ -239,6 +272,7 @@ public record Diagnosis(Measurements measurements, MeasuredDuty.Basis basis, Est
             double dUadR = (nowPlus.ua() - now.ua()) / dR;
             double perR = now.resistances().airFouling() > 0 ? now.resistances().airFouling() / r
                     : nowPlus.resistances().airFouling() / (r + dR);
+            stageDone();
             Outputs base = new Outputs(r, now.ua(), clean.ua(), r * perR * clean.ua(), now.capacity(), clean.capacity());
             double[] y0 = base.all();
             double[] u2 = new double[y0.length];
@@ -255,6 +289,7 @@ public record Diagnosis(Measurements measurements, MeasuredDuty.Basis basis, Est
             for (Map.Entry<Input, Double> e : steps.entrySet()) {
                 Input in = e.getKey();
                 Reading reading = m.get(in);
+                stageDone();
                 if (reading == null || reading.accuracy() == 0) {
                     continue;
                 }
@@ -311,6 +346,7 @@ public record Diagnosis(Measurements measurements, MeasuredDuty.Basis basis, Est
                 u2[k] += c * c;
             }
             budget.put("airSideCorrelation.j", Math.abs(rJ - r));
+            stageDone();
             Estimate fouling = Estimate.of(r, Math.sqrt(u2[0]), true);
             Estimate level = Estimate.of(y0[3], Math.sqrt(u2[3]), true);
             checkMassFlow(now);

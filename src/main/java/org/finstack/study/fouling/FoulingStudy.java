@@ -5,6 +5,7 @@ import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Locale;
 import java.util.Set;
+import java.util.concurrent.CancellationException;
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
 import org.apache.commons.math3.exception.TooManyEvaluationsException;
 import org.finstack.coil.CoilCase;
@@ -13,6 +14,7 @@ import org.finstack.core.ConvergenceException;
 import org.finstack.core.InputException;
 import org.finstack.core.Msg;
 import org.finstack.core.Numbers;
+import org.finstack.study.Progress;
 
 /**
  * What air-side fouling costs a coil, from clean to heavily fouled, with the fan in the loop
@@ -70,6 +72,25 @@ public final class FoulingStudy {
      */
     public static FoulingCurve curve(CoilCase clean, CoilFan fan, double conductivity, double maxThickness,
             int levels) {
+        return curve(clean, fan, conductivity, maxThickness, levels, Progress.NONE);
+    }
+
+    /**
+     * Capacity, airflow and pressure drop at evenly spaced deposit thicknesses, reporting each
+     * level done and stopping between levels when asked.
+     *
+     * @param clean        the clean case (its airflow is the fan's starting guess; its own
+     *                     air-side and inside fouling resistances are kept at every level)
+     * @param fan          the fan, or {@code null} to hold the airflow
+     * @param conductivity deposit conductivity [W/(m K)]
+     * @param maxThickness the last level's deposit thickness [m]
+     * @param levels       number of levels, 2 to 200, the first clean
+     * @param progress     hears of each level done; checked for cancellation before each level
+     * @return the curve
+     * @throws CancellationException when {@code progress} asks to stop
+     */
+    public static FoulingCurve curve(CoilCase clean, CoilFan fan, double conductivity, double maxThickness,
+            int levels, Progress progress) {
         Check.positive("depositConductivity", conductivity);
         Check.positive("maxThickness", maxThickness);
         if (levels < 2 || levels > 200) {
@@ -80,6 +101,9 @@ public final class FoulingStudy {
         FoulingPoint first = null;
         double guess = 0;
         for (int i = 0; i < levels; i++) {
+            if (progress.cancelled()) {
+                throw new CancellationException("fouling curve cancelled");
+            }
             FoulingLevel level = new FoulingLevel(maxThickness * i / (levels - 1), conductivity);
             FoulingPoint p = point(clean, fan, level, guess, first, warnings);
             if (first == null) {
@@ -87,6 +111,7 @@ public final class FoulingStudy {
             }
             guess = p.airflow();
             points.add(p);
+            progress.step(i + 1, levels);
         }
         return new FoulingCurve(points, notes(fan), new ArrayList<>(warnings));
     }

@@ -5,6 +5,7 @@ import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Locale;
 import java.util.Set;
+import java.util.concurrent.CancellationException;
 import org.finstack.coil.CoilCase;
 import org.finstack.core.Check;
 import org.finstack.core.InputException;
@@ -12,6 +13,7 @@ import org.finstack.core.Msg;
 import org.finstack.core.Numbers;
 import org.finstack.core.Warnings;
 import org.finstack.fluid.psychro.MoistAirState;
+import org.finstack.study.Progress;
 import org.finstack.study.fouling.CoilFan;
 import org.finstack.study.fouling.DepositLayer;
 import org.finstack.study.fouling.FanInLoop;
@@ -68,6 +70,23 @@ public final class FrostStudy {
      * @return the timeline and the defrost interval
      */
     public static FrostResult march(CoilCase clean, CoilFan fan, double hours, int steps, double threshold) {
+        return march(clean, fan, hours, steps, threshold, Progress.NONE);
+    }
+
+    /**
+     * The march, reporting each time step done and stopping between steps when asked.
+     *
+     * @param clean     the case with a clean coil (its airflow is the fan's starting guess)
+     * @param fan       the fan, or {@code null} to hold the airflow (the loss is then understated)
+     * @param hours     time to march [h], up to 1000
+     * @param steps     number of equal time steps, 1 to {@link #MAX_STEPS}
+     * @param threshold share of the clean capacity or airflow at which defrost is due [-], in (0, 1)
+     * @param progress  hears of each step done; checked for cancellation before each step
+     * @return the timeline and the defrost interval
+     * @throws CancellationException when {@code progress} asks to stop
+     */
+    public static FrostResult march(CoilCase clean, CoilFan fan, double hours, int steps, double threshold,
+            Progress progress) {
         Check.positive("hours", hours);
         Check.within("hours", hours, 0, 1000);
         if (steps < 1 || steps > MAX_STEPS) {
@@ -110,6 +129,10 @@ public final class FrostStudy {
         double interval = Double.NaN;
         FanInLoop.LoopRating now = first;
         for (int i = 1; i <= steps; i++) {
+            if (progress.cancelled()) {
+                throw new CancellationException("frost march cancelled");
+            }
+            progress.step(i - 1, steps);
             double growth = now.rating().moisture().frost() ? now.rating().moisture().condensate() : 0;
             mass += growth * dt * HOUR;
             double delta = mass / (rho * area);

@@ -4,6 +4,8 @@ import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
 import java.util.List;
+import java.util.concurrent.CancellationException;
+import org.finstack.study.Progress;
 import org.finstack.coil.CoilCase;
 import org.finstack.coil.CoilModels;
 import org.finstack.coil.Rating;
@@ -112,5 +114,39 @@ class FoulingStudyTest {
                 .hasMessageContaining("depositConductivity");
         assertThatThrownBy(() -> FoulingLevel.dust(0.01).applyTo(condenser)).isInstanceOf(InputException.class)
                 .hasMessageContaining("depositThickness");
+    }
+
+    @Test
+    void progressHearsEachLevelAndCancelStopsBetweenLevels() {
+        double heavy = FoulingStudy.heavyThickness(condenser);
+        Stopper all = new Stopper(Integer.MAX_VALUE);
+        FoulingStudy.FoulingCurve curve = FoulingStudy.curve(condenser, null, FoulingLevel.DUST_CONDUCTIVITY, heavy, 4,
+                all);
+        assertThat(all.done).containsExactly(1, 2, 3, 4);
+        assertThat(curve).isEqualTo(FoulingStudy.curve(condenser, null, FoulingLevel.DUST_CONDUCTIVITY, heavy, 4));
+        Stopper two = new Stopper(2);
+        assertThatThrownBy(() -> FoulingStudy.curve(condenser, null, FoulingLevel.DUST_CONDUCTIVITY, heavy, 4, two))
+                .isInstanceOf(CancellationException.class);
+        assertThat(two.done).containsExactly(1, 2);
+    }
+
+    /** A progress sink that records the steps and asks to stop once {@code stopAfter} are done. */
+    private static final class Stopper implements Progress {
+        final java.util.List<Integer> done = new java.util.ArrayList<>();
+        private final int stopAfter;
+
+        Stopper(int stopAfter) {
+            this.stopAfter = stopAfter;
+        }
+
+        @Override
+        public void step(int d, int total) {
+            done.add(d);
+        }
+
+        @Override
+        public boolean cancelled() {
+            return done.size() >= stopAfter;
+        }
     }
 }

@@ -1,0 +1,285 @@
+package org.finstack.ui;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.junit.jupiter.api.Assumptions.assumeFalse;
+
+import java.awt.GraphicsEnvironment;
+import java.awt.Graphics2D;
+import java.awt.image.BufferedImage;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Locale;
+import java.util.UUID;
+import java.util.concurrent.Callable;
+import java.util.prefs.BackingStoreException;
+import java.util.prefs.Preferences;
+import javax.imageio.ImageIO;
+import javax.swing.JTable;
+import org.assertj.swing.edt.FailOnThreadViolationRepaintManager;
+import org.assertj.swing.edt.GuiActionRunner;
+import org.assertj.swing.fixture.FrameFixture;
+import org.assertj.swing.timing.Condition;
+import org.assertj.swing.timing.Pause;
+import org.assertj.swing.timing.Timeout;
+import org.finstack.coil.CoilCase;
+import org.finstack.coil.CoilModels;
+import org.finstack.coil.Rating;
+import org.finstack.core.Numbers;
+import org.finstack.study.Constraints;
+import org.finstack.study.Project;
+import org.finstack.study.diagnosis.Diagnosis;
+import org.finstack.study.fan.FanCurve;
+import org.finstack.study.fouling.CoilFan;
+import org.finstack.study.fouling.FoulingLevel;
+import org.finstack.study.fouling.FoulingStudy;
+import org.finstack.study.frost.FrostStudy;
+import org.finstack.units.Dimension;
+import org.finstack.units.Quantities;
+import org.finstack.units.UnitSystem;
+import org.junit.jupiter.api.AfterEach;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+
+/**
+ * Drives the Fouling &amp; frost and Diagnosis tabs on the demo project (the Otterby condenser with
+ * its project fan curve) as a user would: a heaviest deposit that chokes the coil beyond the fan
+ * curve is refused with the study's reason; the fouling curve starts at the clean coil with no loss,
+ * its capacities fall level by level, and every cell of its table is what {@link FoulingStudy}
+ * gives for the same case, fan, deposit and levels run directly; a diagnosis of readings made from
+ * a rating of the clean coil finds about no loss; a chill-room evaporator below 0 °C gets the frost
+ * timeline {@link FrostStudy} gives; an impossible reading is refused with the
+ * study's message naming the field; Cancel stops the work under way. The reference values come from the study and the rating
+ * model run directly ({@link CoilModels#rate}) on the demo project's case. Skipped without a
+ * display (CI runs it under Xvfb); screenshots go to target/screenshots.
+ */
+class WorkbenchFieldGuiTest {
+
+    private static final Path SHOTS = Path.of("target", "screenshots");
+    private static final String OUT = "measured.airOutletTemperature";
+
+    private Preferences node;
+    private WorkbenchFrame frame;
+    private FrameFixture window;
+
+    @BeforeAll
+    static void needsDisplay() {
+        assumeFalse(GraphicsEnvironment.isHeadless(), "no display: GUI tests skipped (CI runs them under Xvfb)");
+        FailOnThreadViolationRepaintManager.install();
+    }
+
+    @BeforeEach
+    void open() {
+        node = Preferences.userRoot().node("org/finstack/test-" + UUID.randomUUID());
+        UiPreferences prefs = new UiPreferences(node);
+        frame = GuiActionRunner.execute(() -> Workbench.open(Workbench.demo(), null, prefs, false));
+        window = new FrameFixture(frame);
+        window.resizeTo(new java.awt.Dimension(1280, 820));
+        awaitCondition("rating finished", () -> !frame.busy() && frame.results().rating() != null);
+    }
+
+    @AfterEach
+    void close() throws BackingStoreException {
+        if (window != null) {
+            assertThat(onEdt(() -> frame.runner().ratingsOnEventThread())).as("ratings run on the event thread")
+                    .isZero();
+            window.cleanUp();
+        }
+        if (node != null) {
+            node.removeNode();
+        }
+    }
+
+    @Test
+    void foulingCurveStartsCleanFallsWithLevelAndEqualsTheStudy() {
+        window.tabbedPane("tabs").selectTab(Messages.get("field.tab.fouling"));
+        FoulingPanel panel = (FoulingPanel) window.panel("field.fouling").target();
+        window.comboBox("fouling.fan").requireSelection(FoulingPanel.FanChoice.PROJECT_CURVE.toString());
+        // the default heaviest deposit (40 % of the fin gap) chokes the coil beyond the project's fan
+        // curve: refused with the study's reason, no numbers shown
+        window.button("fouling.run").click();
+        awaitCondition("refused", () -> !panel.runner().running()
+                && window.textBox("fouling.notes").text().contains("cannot move air"));
+        assertThat(onEdt(panel::outcome)).isNull();
+        window.table("fouling.table").requireRowCount(0);
+        window.textBox("fouling.maxThickness").setText("0.12 mm");
+        window.button("fouling.run").click();
+        awaitCondition("fouling worked out", () -> panel.outcome() != null && !panel.runner().running());
+
+        // the reference: the study run directly on the demo's case, with the project's fan curve
+        Project p = Workbench.demo();
+        CoilCase c = p.caseOf(0);
+        List<Constraints.FanPoint> points = p.constraints().fanCurve();
+        CoilFan fan = new CoilFan.Curve(new FanCurve(points.stream().mapToDouble(Constraints.FanPoint::volumeFlow)
+                .toArray(), points.stream().mapToDouble(Constraints.FanPoint::pressure).toArray()));
+        FoulingStudy.FoulingCurve expected = FoulingStudy.curve(c, fan, FoulingLevel.DUST_CONDUCTIVITY, 0.12e-3, 6);
+        List<FoulingStudy.FoulingPoint> e = expected.points();
+        assertThat(e.get(0).thickness()).isZero();
+        assertThat(e.get(0).capacityLossFraction()).isZero();
+
+        JTable table = window.table("fouling.table").target();
+        window.table("fouling.table").requireRowCount(6);
+        assertThat(cell(table, 0, "deposit")).isEqualTo("0 mm");
+        assertThat(cell(table, 0, "loss")).isEqualTo("0.0 %");
+        UnitSystem si = UnitSystem.SI;
+        for (int i = 0; i < e.size(); i++) {
+            FoulingStudy.FoulingPoint x = e.get(i);
+            assertThat(cell(table, i, "deposit")).isEqualTo(Quantities.format(x.thickness(), Dimension.LENGTH, si,
+                    "mm"));
+            assertThat(cell(table, i, "capacity")).isEqualTo(Quantities.format(x.capacity(), Dimension.HEAT_FLOW, si));
+            assertThat(cell(table, i, "airflow")).isEqualTo(Quantities.format(x.airflow(), Dimension.VOLUME_FLOW, si));
+            assertThat(cell(table, i, "pressureDrop")).isEqualTo(Quantities.format(x.airPressureDrop(),
+                    Dimension.PRESSURE_DIFFERENCE, si));
+            assertThat(cell(table, i, "loss")).isEqualTo(String.format(Locale.ROOT, "%.1f %%",
+                    100 * x.capacityLossFraction()));
+            if (i > 0) {
+                assertThat(x.capacity()).as("capacity at level %d", i).isLessThan(e.get(i - 1).capacity());
+            }
+        }
+        // the panel holds the very numbers of the study, not only their rounded text
+        assertThat(onEdt(() -> panel.outcome().curve())).isEqualTo(expected);
+        // a condenser: no frost timeline, said plainly; the payback for the heaviest level in a sentence
+        assertThat(window.textBox("fouling.frostSummary").text()).contains(Messages.get("field.frost.condenser"));
+        assertThat(window.textBox("fouling.payback").text()).contains("Cleaning this condenser would save about")
+                .contains("pays back");
+        assertThat(window.textBox("fouling.cautions").text()).contains("work at height");
+        shot("15-fouling-and-frost");
+        // US units: the same numbers, shown in US units
+        window.toggleButton("units.US").click();
+        assertThat(cell(table, 5, "capacity")).isEqualTo(Quantities.format(e.get(5).capacity(), Dimension.HEAT_FLOW,
+                UnitSystem.US)).endsWith("Btu/h");
+        window.textBox("fouling.maxThickness").requireText(Quantities.format(0.12e-3, Dimension.LENGTH, UnitSystem.US));
+    }
+
+    @Test
+    void cancelStopsTheWorkUnderWayAndShowsNothing() throws InterruptedException {
+        window.tabbedPane("tabs").selectTab(Messages.get("field.tab.fouling"));
+        FoulingPanel panel = (FoulingPanel) window.panel("field.fouling").target();
+        java.util.concurrent.CountDownLatch started = new java.util.concurrent.CountDownLatch(1);
+        java.util.concurrent.atomic.AtomicBoolean sawCancel = new java.util.concurrent.atomic.AtomicBoolean();
+        java.util.concurrent.atomic.AtomicBoolean delivered = new java.util.concurrent.atomic.AtomicBoolean();
+        // work that runs until it is told to stop, as the studies do between their steps
+        GuiActionRunner.execute(() -> panel.runner().start(p -> {
+            started.countDown();
+            while (!p.cancelled()) {
+                Thread.onSpinWait();
+            }
+            sawCancel.set(true);
+            throw new java.util.concurrent.CancellationException("stopped");
+        }, r -> delivered.set(true), e -> delivered.set(true)));
+        assertThat(started.await(10, java.util.concurrent.TimeUnit.SECONDS)).isTrue();
+        window.button("fouling.run").requireDisabled();
+        window.button("fouling.cancel").click();
+        awaitCondition("cancelled", () -> !panel.runner().running());
+        window.label("fouling.status").requireText(Messages.get("field.status.cancelled"));
+        window.button("fouling.run").requireEnabled();
+        awaitCondition("the work saw Cancel", sawCancel::get);
+        assertThat(delivered.get()).isFalse();
+        assertThat(onEdt(panel::outcome)).isNull();
+    }
+
+    @Test
+    void aChillRoomEvaporatorBelowZeroGetsItsFrostTimeline() {
+        Path chill = Path.of("examples", "marrowfield-chill-evaporator-frost-fan.json");
+        assertThat(onEdt(() -> frame.importCase(chill))).isTrue();
+        awaitCondition("rating finished", () -> !frame.busy() && frame.results().rating() != null);
+        window.tabbedPane("tabs").selectTab(Messages.get("field.tab.fouling"));
+        FoulingPanel panel = (FoulingPanel) window.panel("field.fouling").target();
+        window.comboBox("fouling.fan").selectItem(FoulingPanel.FanChoice.HELD.toString());
+        assertThat(window.label("fouling.fanNote").text()).contains("understated");
+        window.button("fouling.run").click();
+        awaitCondition("frost worked out", () -> panel.outcome() != null && !panel.runner().running());
+        CoilCase c = onEdt(() -> frame.model().project().caseOf(frame.model().selected()));
+        FrostStudy.FrostResult expected = FrostStudy.march(c, null, 6, FoulingPanel.FROST_STEPS,
+                FrostStudy.DEFAULT_THRESHOLD);
+        assertThat(expected.frosting()).isTrue();
+        assertThat(onEdt(() -> panel.outcome().frost())).isEqualTo(expected);
+        assertThat(window.textBox("fouling.frostSummary").text()).isEqualTo(Double.isNaN(expected.defrostInterval())
+                ? Messages.format("field.frost.noDefrost", "6")
+                : Messages.format("field.frost.interval", Numbers.brief(expected.defrostInterval()), "70"));
+        assertThat(window.textBox("fouling.payback").text()).contains("this evaporator");
+        shot("18-frost-timeline");
+    }
+
+    @Test
+    void diagnosisOfTheCleanCoilsOwnRatingFindsAboutNoLoss() {
+        window.tabbedPane("tabs").selectTab(Messages.get("field.tab.diagnosis"));
+        DiagnosisPanel panel = (DiagnosisPanel) window.panel("field.diagnosis").target();
+        // readings made from a rating of the clean coil: entering air and saturation as the case (already
+        // filled in from it), leaving air and airflow from the rating
+        Rating clean = CoilModels.rate(Workbench.demo().caseOf(0));
+        window.textBox(OUT).setText(String.format(Locale.ROOT, "%.6f C", clean.airOutletTemperature() - 273.15));
+        window.textBox("measured.volumeFlow").setText(String.format(Locale.ROOT, "%.8f m3/s", clean.airVolumeFlow()));
+        window.button("diagnosis.run").click();
+        awaitCondition("diagnosed", () -> panel.diagnosis() != null && !panel.runner().running());
+        Diagnosis d = onEdt(panel::diagnosis);
+        assertThat(d.capacityLossFraction().value()).as("loss of a clean coil").isBetween(-0.005, 0.005);
+        assertThat(window.label("diagnosis.loss").text()).startsWith(String.format(Locale.ROOT, "%.1f %%",
+                100 * d.capacityLossFraction().value()));
+        assertThat(window.label("diagnosis.capacityNow").text()).startsWith(Quantities.format(d.capacityNow().value(),
+                Dimension.HEAT_FLOW, UnitSystem.SI));
+        // the rating's air temperature rise (7.5 K) is below a healthy condenser's 8 to 15 K: marked low
+        assertThat(window.label("diagnosis.healthy.airOutletTemperature").text()).contains("air temperature rise")
+                .endsWith("low");
+        shot("16-diagnosis");
+    }
+
+    @Test
+    void anImpossibleReadingIsRefusedWithTheFieldNamed() {
+        window.tabbedPane("tabs").selectTab(Messages.get("field.tab.diagnosis"));
+        DiagnosisPanel panel = (DiagnosisPanel) window.panel("field.diagnosis").target();
+        // a condenser's leaving air colder than its entering air (32 C)
+        window.textBox(OUT).setText("25 C");
+        window.button("diagnosis.run").click();
+        awaitCondition("refused", () -> panel.error().contains(OUT));
+        assertThat(onEdt(panel::error)).contains("not warmer than the entering air");
+        assertThat(onEdt(() -> panel.field(OUT).error())).startsWith(OUT);
+        assertThat(onEdt(panel::diagnosis)).isNull();
+        shot("17-diagnosis-refused");
+        // no airflow at all
+        window.textBox(OUT).setText("39 C");
+        window.textBox("measured.volumeFlow").setText("0 m3/h");
+        window.button("diagnosis.run").click();
+        awaitCondition("refused", () -> panel.error().contains("measured.volumeFlow"));
+        assertThat(onEdt(() -> panel.field("measured.volumeFlow").error())).startsWith("measured.volumeFlow");
+    }
+
+    // --- helpers ---
+
+    private static String cell(JTable t, int row, String column) {
+        int col = List.of(FoulingPanel.COLUMNS).indexOf(column);
+        return onEdt(() -> String.valueOf(t.getValueAt(row, col)));
+    }
+
+    private void awaitCondition(String what, Callable<Boolean> test) {
+        Pause.pause(new Condition(what) {
+            @Override
+            public boolean test() {
+                return onEdt(test);
+            }
+        }, Timeout.timeout(60_000));
+    }
+
+    private static <T> T onEdt(Callable<T> c) {
+        return GuiActionRunner.execute(c);
+    }
+
+    private void shot(String name) {
+        try {
+            Files.createDirectories(SHOTS);
+            BufferedImage img = GuiActionRunner.execute(() -> {
+                BufferedImage i = new BufferedImage(frame.getRootPane().getWidth(), frame.getRootPane().getHeight(),
+                        BufferedImage.TYPE_INT_RGB);
+                Graphics2D g = i.createGraphics();
+                frame.getRootPane().paint(g);
+                g.dispose();
+                return i;
+            });
+            ImageIO.write(img, "png", SHOTS.resolve(name + ".png").toFile());
+        } catch (IOException e) {
+            throw new AssertionError("cannot write screenshot " + name, e);
+        }
+    }
+}
