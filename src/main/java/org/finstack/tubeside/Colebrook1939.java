@@ -20,7 +20,8 @@ import org.finstack.core.Warnings;
  * <p>Validity: turbulent flow; a warning below Re = 4000 (where the Moody chart starts its
  * turbulent zone) or above e/D = 0.05. Colebrook gives no scatter; the equation is the basis
  * of the Moody (1944) chart, which Moody stated as accurate to about ±5 % for smooth pipes and
- * ±10 % for rough ones (Moody 1944, Trans. ASME 66:671, from memory).
+ * ±10 % for rough ones (Moody 1944, Trans. ASME 66:671, from memory); F.M. White's Fluid
+ * Mechanics puts the chart at about ±15 % for design calculations.
  *
  * <p>Worked example: Re = 1e5, e/D = 1e-4 gives f = 0.0185139 (the same value as the
  * {@code fluids} library's {@code Clamond(1E5, 1E-4)} docstring).

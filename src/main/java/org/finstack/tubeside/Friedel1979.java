@@ -26,13 +26,15 @@ import org.finstack.core.Warnings;
  * surface tension, g [m/s2] standard gravity. At x = 0 it gives the liquid-only gradient, at
  * x = 1 the vapour-only gradient.
  *
- * <p>The Froude exponent is 0.045 as restated by Collier &amp; Thome (1994) and Thome's
- * Engineering Data Book III (from memory); the {@code fluids} library uses 0.0454 and says
- * Whalley (1987) prints that value. The two differ by under 0.3 % for 1e-3 &lt; Fr &lt; 1e3.
+ * <p>The Froude exponent is 0.045 as restated in Thome's Engineering Data Book III (2004); the
+ * {@code fluids} library's {@code Friedel} notes list that book among the sources printing 0.045
+ * and use 0.0454, which they find in Whalley (1987) and Ghiaasiaan (2007) and take to be the
+ * original. The two differ by under 0.3 % for 1e-3 &lt; Fr &lt; 1e3.
  *
- * <p>Validity: mu_l/mu_v below 1000 (Whalley 1987, as quoted in the {@code fluids}
- * documentation). Published scatter: a standard deviation of about 30 % for one-component
- * flows over a data bank of some 25 000 points (from memory).
+ * <p>Validity: mu_l/mu_v below 1000 (the {@code fluids} library's {@code Friedel} notes: known to
+ * work poorly above that). Published scatter: a standard deviation of about 30 % for
+ * one-component flows over a data bank of some 25 000 points (from memory); the same notes give
+ * mean errors on the order of 40 %.
  *
  * <p>Worked example (fixture R134a at about 5 °C, Churchill smooth-tube friction): D = 8 mm,
  * G = 200 kg/(m2 s), x = 0.5 give -dp/dz = 2429.03 Pa/m.
@@ -49,7 +51,7 @@ public final class Friedel1979 implements TwoPhaseFriction {
 
     /** Recommended range. */
     public static final Validity VALIDITY = Validity.of(
-            Limit.of("mu_l/mu_v", 1, 1000)); // Whalley 1987, as quoted in fluids' Friedel documentation
+            Limit.of("mu_l/mu_v", 1, 1000)); // fluids library, Friedel notes
 
     /** The default instance, with {@link Churchill1977#SMOOTH}. */
     public static final Friedel1979 INSTANCE = new Friedel1979(Churchill1977.SMOOTH);

@@ -27,9 +27,11 @@ import org.finstack.core.Warnings;
  * property correction of Gnielinski's paper are left out (long tubes, moderate temperature
  * differences); for a refrigerant coil the tube length is hundreds of diameters.
  *
- * <p>Validity (Gnielinski 1976): 0.5 &le; Pr &le; 2000 and 2300 &le; Re &le; 5e6; outside,
- * a warning (except below Re = 2300, where the laminar value is returned without one). Published accuracy: most of the 800 data points within ±20 % (Gnielinski 1976,
- * from memory).
+ * <p>Validity (Gnielinski 1976, as restated in Rohsenow, Hartnett &amp; Cho, Handbook of Heat
+ * Transfer, 3rd ed., 1998, and in the {@code ht} library's {@code turbulent_Gnielinski} notes):
+ * 0.5 &le; Pr &le; 2000 and 2300 &le; Re &le; 5e6; outside, a warning (except below Re = 2300,
+ * where the laminar value is returned without one). Published accuracy: most of the 800 data
+ * points within ±20 % (Gnielinski 1976, from memory).
  *
  * <p>Worked example: Re = 50 000, Pr = 0.8 gives Nu = 112.676; Re = 5000, Pr = 3, uniform heat
  * flux gives Nu = 22.8346 (transition interpolation).
@@ -47,8 +49,8 @@ public final class Gnielinski1976 {
 
     /** Published range. */
     public static final Validity VALIDITY = Validity.of(
-            Limit.of("Re", 2300, 5e6), // Gnielinski 1976
-            Limit.of("Pr", 0.5, 2000)); // Gnielinski 1976
+            Limit.of("Re", 2300, 5e6), // Gnielinski 1976; Handbook of Heat Transfer 1998; ht turbulent_Gnielinski
+            Limit.of("Pr", 0.5, 2000)); // idem
 
     /** Upper end of laminar flow [-] (Gnielinski 2013). */
     public static final double RE_LAMINAR = 2300;

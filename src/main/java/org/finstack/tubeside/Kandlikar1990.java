@@ -25,10 +25,10 @@ import org.finstack.core.Warnings;
  * {@link #FLUID_PARAMETERS}; an unlisted fluid gets F_fl = 1 with a warning. The tube is taken
  * as horizontal. Other symbols and units as in {@link GungorWinterton1987}.
  *
- * <p>Validity: the database of the paper (5246 data points, 10 fluids) covers qualities up to
- * about 0.8 (from memory); a warning above that. Published accuracy: mean deviation 15.9 % for
- * water and 18.8 % for the refrigerants (from memory). Above x = 0.9 the {@link Dryout}
- * treatment applies.
+ * <p>Validity: the database of the paper (5246 data points from 24 experimental investigations,
+ * Kandlikar 1990 abstract) covers qualities up to about 0.8 (from memory); a warning above that.
+ * Published accuracy: mean deviation 15.9 % for water and 18.8 % for the refrigerants
+ * (Kandlikar 1990 abstract). Above x = 0.9 the {@link Dryout} treatment applies.
  *
  * <p>Worked example (fixture R134a at about 5 °C, F_fl = 1.63): D = 8 mm, G = 200 kg/(m2 s),
  * x = 0.5, q = 10 kW/m2 give h = 3142.67 W/(m2 K).

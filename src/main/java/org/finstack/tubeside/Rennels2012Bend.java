@@ -18,8 +18,10 @@ import org.finstack.core.Warnings;
  * own developed length (the first term); the length of a return bend should therefore not also
  * be counted as straight tube.
  *
- * <p>Validity: r/d from 1 upward (assessed: the bends of Ito's data start at r/d = 1, from
- * memory); a warning below. No scatter figure is restated here.
+ * <p>Validity: r/d from 0.5 upward (a sharp inner edge) and bend angles from 0 to 180°, as
+ * Rennels &amp; Hudson state for the formula, which they fitted to smooth-pipe data; restated in
+ * the {@code fluids} library's {@code bend_rounded} notes. A warning below r/d = 0.5; the
+ * authors give no upper limit. No scatter figure is restated here.
  *
  * <p>Worked example: f = 0.02, a = 180°, r/d = 1.5 give K = 0.294396 (the same formula as the
  * {@code fluids} library's {@code bend_rounded(method='Rennels')}).
@@ -31,9 +33,9 @@ public final class Rennels2012Bend {
             "Rennels, D.C., Hudson, H.M., 2012, Pipe Flow: A Practical and Comprehensive Guide, Wiley,"
                     + " chapter 15 (bends)");
 
-    /** Assessed range. */
-    public static final Validity VALIDITY = Validity.assessed("of Ito's bend data (from memory)",
-            Limit.of("r/d", 1, 20)); // Ito 1960 data as used by Rennels & Hudson 2012, from memory
+    /** Published range (the angle range is enforced as an input check). */
+    public static final Validity VALIDITY = Validity.of(
+            Limit.of("r/d", 0.5, Double.MAX_VALUE)); // Rennels & Hudson 2012; fluids, bend_rounded notes
 
     private static final String METHOD = "Rennels & Hudson 2012 bend";
 

@@ -21,8 +21,11 @@ import org.finstack.core.Warnings;
  *
  * <p>Validity (abstract of the paper): D 2 to 49 mm, pr 0.0008 to 0.9, G 4 to 820 kg/(m2 s),
  * all-liquid Reynolds number 68 to 85 000, Pr_l 1 to 18. Published accuracy: 1189 data
- * points from 39 sources with a mean deviation of 14.4 % (abstract). The regime boundaries and
- * h_I, h_Nu are as commonly restated from the paper (from memory).
+ * points from 39 sources with a mean deviation of 14.4 % (abstract). Z and the regime I boundary
+ * J_g &ge; 0.98 (Z + 0.263)^-0.62 are printed in "Design and Operation of Heat Exchangers and
+ * their Networks", Academic Press 2020, section 4.2.3, for horizontal channels in Shah's later
+ * (2016) form, which adds We_l &gt; 100 (not applied here); that the 2009 paper uses the same
+ * boundary, and the forms of h_I and h_Nu, are as commonly restated from the paper (from memory).
  *
  * <p>Worked example (fixture R134a at about 40 °C): D = 8 mm, G = 200 kg/(m2 s), x = 0.5
  * give h = 2281.84 W/(m2 K) (regime I); G = 50 kg/(m2 s), x = 0.2 give h = 1090.89 W/(m2 K)

@@ -14,7 +14,8 @@ import org.finstack.core.Warnings;
  * with x [-] the quality and rho [kg/m3] the saturated densities.
  *
  * <p>Validity: derived for annular flow without entrainment; the form holds for 0 &le; x &le; 1.
- * Zivi compared it with steam-water data and gives no scatter figure (from memory).
+ * Zivi compared it with steam-water data (the {@code fluids} library's {@code Zivi} notes: based
+ * on experimental data for boiling of water); that he gives no scatter figure is from memory.
  *
  * <p>Worked example: x = 0.4, rho_l = 800, rho_v = 2.5 kg/m3 give alpha = 0.968934 (the
  * {@code fluids} library's {@code Zivi(.4, 800, 2.5)} docstring gives 0.9689339909056356).

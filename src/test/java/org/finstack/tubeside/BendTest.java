@@ -68,9 +68,22 @@ class BendTest {
     }
 
     @Test
-    void tightBendWarns() {
+    void tightBendWarnsBelowPublishedRange() {
+        // Rennels & Hudson 2012: r/d from 0.5 upward (was r/d >= 1, a value from memory)
         Warnings w = new Warnings();
-        Rennels2012Bend.lossCoefficient(0.02, 180, 0.6, w);
-        assertThat(w.list()).anyMatch(s -> s.contains("r/d"));
+        Rennels2012Bend.lossCoefficient(0.02, 180, 0.4, w);
+        assertThat(w.list()).anyMatch(s -> s.contains("r/d") && s.contains("published range"));
+        Warnings c = new Warnings();
+        Chisholm1983Bend.pressureDrop(EVAP, TubeFlow.adiabatic(0.008, 200, 0.5), 0.0032, 180, c);
+        assertThat(c.list()).anyMatch(s -> s.contains("r/d"));
+    }
+
+    @Test
+    void noWarningInsidePublishedRange() {
+        for (double rd : new double[] {0.5, 0.6, 1.5, 25}) {
+            Warnings w = new Warnings();
+            Rennels2012Bend.lossCoefficient(0.02, 180, rd, w);
+            assertThat(w.list()).as("r/d = " + rd).noneMatch(s -> s.contains("r/d"));
+        }
     }
 }
