@@ -265,7 +265,16 @@ public final class ZoneCoilModel {
             double hi = evaporator ? tAir - q.outletK() - 1 : Math.min(tAir + 40, tc - 3);
             DoubleUnaryOperator miss = t -> {
                 double p = CoilSetup.referencePressure(s.fluid(), withSaturation(t));
-                return Math.abs(atOutletCondition(q.outletK(), p).duty) - q.watts();
+                try {
+                    return Math.abs(atOutletCondition(q.outletK(), p).duty) - q.watts();
+                } catch (InputException e) {
+                    if (!e.field().equals(CoilSetup.TOO_MUCH_FLOW)) {
+                        throw e;
+                    }
+                    // the flow the outlet condition asks for here loses most of the pressure: this
+                    // lies beyond the required capacity (further from the air), whatever the start
+                    return q.watts();
+                }
             };
             // the far end of the range may be unreachable (e.g. the liquid no longer flashes): step inwards
             double fLo = Double.NaN;
