@@ -15,6 +15,8 @@ import java.util.concurrent.Callable;
 import java.util.prefs.BackingStoreException;
 import java.util.prefs.Preferences;
 import javax.imageio.ImageIO;
+import javax.swing.JButton;
+import javax.swing.JProgressBar;
 import javax.swing.JTable;
 import javax.swing.SwingWorker;
 import org.apache.pdfbox.Loader;
@@ -51,11 +53,12 @@ import org.junit.jupiter.api.io.TempDir;
  * The workbench's studies, driven as a user would on the demo project: the candidate search
  * lists the same ranking as study.search run directly, its first row's capacity is that of a
  * single rating of the candidate, Cancel stops it, and the chosen candidate becomes a new option
- * (undone by Undo); a bad limit is refused naming the field; the sensitivity tab's tornado holds
- * the inputs largest effect first, its first bar the largest effect of study.explain run
- * directly; File &gt; Export report writes a one-page PDF with the existing coil's name in it, and a
- * file that cannot be written is told in a dialog with the reason. A repaint manager fails any
- * Swing access off the event thread. Skipped without a display (CI runs it under Xvfb).
+ * (undone by Undo); a bad limit is refused naming the field; the sensitivity tab's
+ * tornado holds the inputs largest effect first, its first bar the largest effect of
+ * study.explain run directly, and its Cancel leaves no result and the run button enabled; File
+ * &gt; Export report writes a one-page PDF with the existing coil's name in it, and a file that
+ * cannot be written is told in a dialog with the reason. A repaint manager fails any Swing access
+ * off the event thread. Skipped without a display (CI runs it under Xvfb).
  */
 class WorkbenchStudyGuiTest {
 
@@ -201,6 +204,41 @@ class WorkbenchStudyGuiTest {
         assertThat(window.textBox("study.sensitivity.explanation").text())
                 .contains(Explanation.forCoil(expected).get(0));
         shot("16-sensitivity");
+    }
+
+    @Test
+    void cancelStopsTheStepsShowsNoResultAndReEnablesRun() {
+        window.tabbedPane("tabs").selectTab(SENSITIVITY_TAB);
+        SensitivityPanel panel = (SensitivityPanel) window.panel("study.sensitivity").target();
+        window.button("study.sensitivity.cancel").requireDisabled();
+        window.button("study.sensitivity.run").click();
+        awaitCondition("stepped", () -> !panel.running() && panel.result() != null);
+        // a second run, cancelled at once through the button: the earlier result goes too
+        JButton cancel = window.button("study.sensitivity.cancel").target();
+        boolean[] enabledWhileRunning = new boolean[2];
+        GuiActionRunner.execute(() -> {
+            panel.run();
+            enabledWhileRunning[0] = cancel.isEnabled();
+            enabledWhileRunning[1] = window.button("study.sensitivity.run").target().isEnabled();
+            cancel.doClick();
+        });
+        assertThat(enabledWhileRunning).containsExactly(true, false);
+        assertThat(onEdt(panel::running)).isFalse();
+        Pause.pause(500);
+        assertThat(onEdt(panel::result)).isNull();
+        assertThat(onEdt(panel::bars)).isEmpty();
+        window.table("study.sensitivity.table").requireRowCount(0);
+        window.textBox("study.sensitivity.explanation").requireText("");
+        window.label("study.sensitivity.status").requireText(Messages.get("study.sensitivity.cancelled"));
+        window.button("study.sensitivity.run").requireEnabled();
+        window.button("study.sensitivity.cancel").requireDisabled();
+        JProgressBar bar = window.robot().finder().findByName(panel, "study.sensitivity.progress",
+                JProgressBar.class, false);
+        assertThat(onEdt(bar::isVisible)).isFalse();
+        // and the tab works again
+        window.button("study.sensitivity.run").click();
+        awaitCondition("stepped again", () -> !panel.running() && panel.result() != null);
+        assertThat(onEdt(bar::isVisible)).isFalse();
     }
 
     @Test
