@@ -31,6 +31,7 @@ import org.assertj.swing.timing.Timeout;
 import org.finstack.coil.CoilModels;
 import org.finstack.coil.Rating;
 import org.finstack.report.ProjectReport;
+import org.finstack.study.Constraints;
 import org.finstack.study.Progress;
 import org.finstack.study.Project;
 import org.finstack.study.compare.BandSettings;
@@ -53,7 +54,8 @@ import org.junit.jupiter.api.io.TempDir;
  * The workbench's studies, driven as a user would on the demo project: the candidate search
  * lists the same ranking as study.search run directly, its first row's capacity is that of a
  * single rating of the candidate, Cancel stops it, and the chosen candidate becomes a new option
- * (undone by Undo); a bad limit is refused naming the field; the sensitivity tab's
+ * (undone by Undo); a change of the project's conditions or constraints marks the list out of
+ * date until the next search; a bad limit is refused naming the field; the sensitivity tab's
  * tornado holds the inputs largest effect first, its first bar the largest effect of
  * study.explain run directly, and its Cancel leaves no result and the run button enabled; File
  * &gt; Export report writes a one-page PDF with the existing coil's name in it, and a file that
@@ -166,6 +168,45 @@ class WorkbenchStudyGuiTest {
         window.label("study.search.status").requireText(Messages.get("study.search.cancelled"));
         window.button("study.search.run").requireEnabled();
         window.button("study.search.cancel").requireDisabled();
+    }
+
+    @Test
+    void changedConditionsOrConstraintsMarkTheListOutOfDateUntilSearchedAgain() {
+        window.tabbedPane("tabs").selectTab(SEARCH_TAB);
+        SearchPanel panel = (SearchPanel) window.panel("study.search").target();
+        window.textBox("study.search.limit").setText("5");
+        window.button("study.search.run").click();
+        awaitCondition("searched", () -> !panel.running() && panel.result() != null);
+        assertThat(onEdt(panel::outOfDate)).isFalse();
+        // an edit that leaves conditions and constraints alone: adding a candidate as an option
+        window.table("study.search.table").selectRows(0);
+        window.button("study.search.add").click();
+        awaitCondition("added", () -> frame.model().project().allOptions().size() == 3);
+        assertThat(onEdt(panel::outOfDate)).isFalse();
+        // the conditions, changed in the Conditions tab as a user would
+        double t = onEdt(() -> frame.model().project().conditions().air().temperature());
+        window.tabbedPane("tabs").selectTab(1);
+        window.textBox("air.inletTemperature").setText(Quantities.format(t + 3, Dimension.TEMPERATURE,
+                UnitSystem.SI));
+        awaitCondition("conditions edited", () -> frame.model().project().conditions().air().temperature() != t);
+        window.tabbedPane("tabs").selectTab(SEARCH_TAB);
+        window.label("study.search.outOfDate").requireVisible().requireText(Messages.get("study.search.outOfDate"));
+        window.table("study.search.table").requireRowCount(5);
+        // undone, the list fits the conditions again; the constraints changed, it is out of date again
+        window.button("toolbar.undo").click();
+        awaitCondition("undone", () -> frame.model().project().conditions().air().temperature() == t);
+        assertThat(onEdt(panel::outOfDate)).isFalse();
+        GuiActionRunner.execute(() -> {
+            Project p = frame.model().project();
+            Constraints k = p.constraints();
+            frame.model().edit(p.withConstraints(new Constraints(k.maxFaceWidth(), k.maxFaceHeight(), k.maxDepth(),
+                    k.circuits(), k.requiredCapacity() + 1000, k.fanCurve(), k.room())), frame.model().selected());
+        });
+        assertThat(onEdt(panel::outOfDate)).isTrue();
+        window.button("study.search.run").click();
+        awaitCondition("searched again", () -> !panel.running() && panel.result() != null
+                && panel.result().requirement().capacity() == frame.model().project().constraints().requiredCapacity());
+        assertThat(onEdt(panel::outOfDate)).isFalse();
     }
 
     @Test
