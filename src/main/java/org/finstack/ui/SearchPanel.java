@@ -37,7 +37,9 @@ import org.finstack.units.Quantities;
  * Searches replacement candidates for the open project ({@link CandidateSearch}: the generic tube
  * patterns within the project's constraints, rated at its conditions) in a worker, with progress
  * and a Cancel that stops the rating; lists the best of them in their ranked order and adds the
- * chosen one to the project as a new option (an edit that can be undone).
+ * chosen one to the project as a new option (an edit that can be undone). When the project's
+ * conditions or constraints no longer equal those the list was searched with, a line above the
+ * table says the list is out of date.
  */
 final class SearchPanel extends JPanel {
 
@@ -55,6 +57,7 @@ final class SearchPanel extends JPanel {
     private final JProgressBar progress = new JProgressBar(0, 100);
     private final JLabel status = new JLabel(Messages.get("study.search.intro"));
     private final JLabel requirement = new JLabel(" ");
+    private final JLabel outOfDate = new JLabel(Messages.get("study.search.outOfDate"));
     private final JTextArea notes = new JTextArea(3, 60);
     private final Rows rows = new Rows();
     private final JTable table = new JTable(rows) {
@@ -69,6 +72,8 @@ final class SearchPanel extends JPanel {
     private final Color normal = status.getForeground();
     private SwingWorker<SearchResult, Void> worker;
     private SearchResult result;
+    /** The project the listed result was searched for, or null. */
+    private Project searched;
 
     SearchPanel(ProjectModel model) {
         super(new BorderLayout(0, UIScale.scale(4)));
@@ -83,6 +88,8 @@ final class SearchPanel extends JPanel {
         progress.setName("study.search.progress");
         status.setName("study.search.status");
         requirement.setName("study.search.requirement");
+        outOfDate.setName("study.search.outOfDate");
+        outOfDate.setVisible(false);
         table.setName("study.search.table");
         notes.setName("study.search.notes");
         cancel.setEnabled(false);
@@ -106,7 +113,11 @@ final class SearchPanel extends JPanel {
         table.setAutoCreateRowSorter(false);
         table.getColumnModel().getColumn(1).setPreferredWidth(UIScale.scale(360));
         table.getSelectionModel().addListSelectionListener(e -> add.setEnabled(selected() != null));
-        add(new JScrollPane(table), BorderLayout.CENTER);
+        JPanel listed = new JPanel(new BorderLayout(0, UIScale.scale(4)));
+        outOfDate.setBorder(BorderFactory.createEmptyBorder(0, UIScale.scale(8), 0, UIScale.scale(8)));
+        listed.add(outOfDate, BorderLayout.NORTH);
+        listed.add(new JScrollPane(table), BorderLayout.CENTER);
+        add(listed, BorderLayout.CENTER);
         notes.setEditable(false);
         notes.setLineWrap(true);
         notes.setWrapStyleWord(true);
@@ -116,7 +127,9 @@ final class SearchPanel extends JPanel {
         cancel.addActionListener(e -> cancel());
         add.addActionListener(e -> addSelected());
         model.addListener(c -> {
-            if (c == ProjectModel.Change.UNITS) {
+            if (c == ProjectModel.Change.PROJECT) {
+                markOutOfDate();
+            } else if (c == ProjectModel.Change.UNITS) {
                 limit.convert(model.units());
                 rows.fireTableDataChanged();
                 if (result != null) {
@@ -170,7 +183,7 @@ final class SearchPanel extends JPanel {
                     return;
                 }
                 try {
-                    show(get(), max);
+                    show(get(), max, project);
                 } catch (InterruptedException e) {
                     Thread.currentThread().interrupt();
                 } catch (CancellationException e) {
@@ -214,6 +227,11 @@ final class SearchPanel extends JPanel {
         return result;
     }
 
+    /** @return whether the list is marked out of date (conditions or constraints changed since the search) */
+    boolean outOfDate() {
+        return outOfDate.isVisible();
+    }
+
     /** @return the candidates listed, in their ranked order */
     List<CandidateResult> shown() {
         return List.copyOf(rows.shown);
@@ -237,8 +255,10 @@ final class SearchPanel extends JPanel {
         say(Messages.format("study.search.added", c.candidate().name()));
     }
 
-    private void show(SearchResult r, int max) {
+    private void show(SearchResult r, int max, Project project) {
         result = r;
+        searched = project;
+        markOutOfDate();
         List<CandidateResult> all = r.candidates();
         rows.shown = max == 0 || max >= all.size() ? all : all.subList(0, max);
         rows.fireTableDataChanged();
@@ -252,6 +272,12 @@ final class SearchPanel extends JPanel {
                 f.field().isEmpty() ? "-" : f.field(), f.example())));
         notes.setText(b.toString());
         notes.setCaretPosition(0);
+    }
+
+    private void markOutOfDate() {
+        Project now = model.project();
+        outOfDate.setVisible(searched != null && !(searched.conditions().equals(now.conditions())
+                && searched.constraints().equals(now.constraints())));
     }
 
     private void showRequirement() {

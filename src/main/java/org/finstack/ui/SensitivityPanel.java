@@ -26,6 +26,7 @@ import javax.swing.SwingWorker;
 import javax.swing.table.AbstractTableModel;
 import org.finstack.coil.CoilCase;
 import org.finstack.core.FinstackException;
+import org.finstack.study.Progress;
 import org.finstack.study.explain.Explanation;
 import org.finstack.study.explain.Sensitivity;
 import org.finstack.ui.draw.Tornado;
@@ -34,9 +35,10 @@ import org.finstack.units.UnitSystem;
 
 /**
  * How the selected option's capacity and air pressure drop answer to a step in each input
- * ({@link Sensitivity}), worked out in a worker: a tornado chart of the capacity change, largest
- * effect first; a table of each step with its capacity and air pressure drop changes; and the
- * trade-offs in plain words ({@link Explanation#forCoil}).
+ * ({@link Sensitivity}), worked out in a worker with progress and a Cancel that stops the rating:
+ * a tornado chart of the capacity change, largest effect first; a table of each step with its
+ * capacity and air pressure drop changes; and the trade-offs in plain words
+ * ({@link Explanation#forCoil}).
  */
 final class SensitivityPanel extends JPanel {
 
@@ -47,13 +49,15 @@ final class SensitivityPanel extends JPanel {
 
     private final ProjectModel model;
     private final JButton run = new JButton(Messages.get("study.sensitivity.run"));
-    private final JProgressBar progress = new JProgressBar();
+    private final JButton cancel = new JButton(Messages.get("study.sensitivity.cancel"));
+    private final JProgressBar progress = new JProgressBar(0, 100);
     private final JLabel status = new JLabel(Messages.get("study.sensitivity.intro"));
     private final Chart chart = new Chart();
     private final Rows rows = new Rows();
     private final JTable table = new JTable(rows);
     private final JTextArea words = new JTextArea(5, 60);
     private final Color normal = status.getForeground();
+    /** The run whose result is still to be shown, or null. */
     private SwingWorker<Sensitivity.Result, Void> worker;
     private Sensitivity.Result result;
     private String optionName;
@@ -63,14 +67,17 @@ final class SensitivityPanel extends JPanel {
         this.model = model;
         setName("study.sensitivity");
         run.setName("study.sensitivity.run");
+        cancel.setName("study.sensitivity.cancel");
         progress.setName("study.sensitivity.progress");
         status.setName("study.sensitivity.status");
         table.setName("study.sensitivity.table");
         words.setName("study.sensitivity.explanation");
         chart.setName("study.sensitivity.tornado");
         progress.setVisible(false);
+        cancel.setEnabled(false);
         JPanel controls = new JPanel(new FlowLayout(FlowLayout.LEFT, UIScale.scale(6), UIScale.scale(4)));
         controls.add(run);
+        controls.add(cancel);
         controls.add(progress);
         JPanel north = new JPanel(new BorderLayout());
         north.add(controls, BorderLayout.NORTH);
@@ -88,6 +95,7 @@ final class SensitivityPanel extends JPanel {
         split.setResizeWeight(0.5);
         add(split, BorderLayout.CENTER);
         run.addActionListener(e -> run());
+        cancel.addActionListener(e -> cancel());
         model.addListener(c -> {
             if (c == ProjectModel.Change.UNITS) {
                 rows.fireTableDataChanged();
@@ -100,8 +108,10 @@ final class SensitivityPanel extends JPanel {
 
     /** Steps each input of the selected option's case, in a worker. */
     void run() {
-        if (worker != null && !worker.isDone()) {
+        if (worker != null) {
             worker.cancel(true);
+            worker = null;
+            running(false);
         }
         String name = model.option().name();
         CoilCase base;
@@ -114,14 +124,25 @@ final class SensitivityPanel extends JPanel {
         SwingWorker<Sensitivity.Result, Void> w = new SwingWorker<>() {
             @Override
             protected Sensitivity.Result doInBackground() {
-                return Sensitivity.of(base);
+                return Sensitivity.of(base, new Progress() {
+                    @Override
+                    public void step(int done, int total) {
+                        setProgress(done * 100 / total);
+                    }
+
+                    @Override
+                    public boolean cancelled() {
+                        return isCancelled();
+                    }
+                });
             }
 
             @Override
             protected void done() {
-                if (worker != this || isCancelled()) {
+                if (worker != this) {
                     return;
                 }
+                worker = null;
                 running(false);
                 try {
                     show(name, get());
@@ -137,16 +158,42 @@ final class SensitivityPanel extends JPanel {
                 }
             }
         };
+        w.addPropertyChangeListener(e -> {
+            if ("progress".equals(e.getPropertyName()) && worker == w) {
+                progress.setValue((Integer) e.getNewValue());
+            }
+        });
         worker = w;
+        progress.setValue(0);
         running(true);
         status.setForeground(normal);
         status.setText(Messages.format("study.sensitivity.running", name));
         w.execute();
     }
 
-    /** @return whether the steps are being rated */
+    /**
+     * Stops the run under way, if any: its rating stops before the next step, and the tab shows no
+     * result, not even an earlier one, until the steps are run again.
+     */
+    void cancel() {
+        if (worker == null) {
+            return;
+        }
+        worker.cancel(true);
+        worker = null;
+        running(false);
+        result = null;
+        chart.bars = List.of();
+        chart.repaint();
+        rows.fireTableDataChanged();
+        words.setText("");
+        status.setForeground(normal);
+        status.setText(Messages.get("study.sensitivity.cancelled"));
+    }
+
+    /** @return whether a run is under way (its result still to be shown) */
     boolean running() {
-        return worker != null && !worker.isDone();
+        return worker != null;
     }
 
     /** @return the last result, or null */
@@ -197,7 +244,7 @@ final class SensitivityPanel extends JPanel {
 
     private void running(boolean on) {
         run.setEnabled(!on);
-        progress.setIndeterminate(on);
+        cancel.setEnabled(on);
         progress.setVisible(on);
     }
 

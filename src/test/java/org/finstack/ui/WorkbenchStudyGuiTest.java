@@ -15,6 +15,8 @@ import java.util.concurrent.Callable;
 import java.util.prefs.BackingStoreException;
 import java.util.prefs.Preferences;
 import javax.imageio.ImageIO;
+import javax.swing.JButton;
+import javax.swing.JProgressBar;
 import javax.swing.JTable;
 import javax.swing.SwingWorker;
 import org.apache.pdfbox.Loader;
@@ -29,6 +31,7 @@ import org.assertj.swing.timing.Timeout;
 import org.finstack.coil.CoilModels;
 import org.finstack.coil.Rating;
 import org.finstack.report.ProjectReport;
+import org.finstack.study.Constraints;
 import org.finstack.study.Progress;
 import org.finstack.study.Project;
 import org.finstack.study.compare.BandSettings;
@@ -51,11 +54,13 @@ import org.junit.jupiter.api.io.TempDir;
  * The workbench's studies, driven as a user would on the demo project: the candidate search
  * lists the same ranking as study.search run directly, its first row's capacity is that of a
  * single rating of the candidate, Cancel stops it, and the chosen candidate becomes a new option
- * (undone by Undo); a bad limit is refused naming the field; the sensitivity tab's tornado holds
- * the inputs largest effect first, its first bar the largest effect of study.explain run
- * directly; File &gt; Export report writes a one-page PDF with the existing coil's name in it, and a
- * file that cannot be written is told in a dialog with the reason. A repaint manager fails any
- * Swing access off the event thread. Skipped without a display (CI runs it under Xvfb).
+ * (undone by Undo); a change of the project's conditions or constraints marks the list out of
+ * date until the next search; a bad limit is refused naming the field; the sensitivity tab's
+ * tornado holds the inputs largest effect first, its first bar the largest effect of
+ * study.explain run directly, and its Cancel leaves no result and the run button enabled; File
+ * &gt; Export report writes a one-page PDF with the existing coil's name in it, and a file that
+ * cannot be written is told in a dialog with the reason. A repaint manager fails any Swing access
+ * off the event thread. Skipped without a display (CI runs it under Xvfb).
  */
 class WorkbenchStudyGuiTest {
 
@@ -166,6 +171,45 @@ class WorkbenchStudyGuiTest {
     }
 
     @Test
+    void changedConditionsOrConstraintsMarkTheListOutOfDateUntilSearchedAgain() {
+        window.tabbedPane("tabs").selectTab(SEARCH_TAB);
+        SearchPanel panel = (SearchPanel) window.panel("study.search").target();
+        window.textBox("study.search.limit").setText("5");
+        window.button("study.search.run").click();
+        awaitCondition("searched", () -> !panel.running() && panel.result() != null);
+        assertThat(onEdt(panel::outOfDate)).isFalse();
+        // an edit that leaves conditions and constraints alone: adding a candidate as an option
+        window.table("study.search.table").selectRows(0);
+        window.button("study.search.add").click();
+        awaitCondition("added", () -> frame.model().project().allOptions().size() == 3);
+        assertThat(onEdt(panel::outOfDate)).isFalse();
+        // the conditions, changed in the Conditions tab as a user would
+        double t = onEdt(() -> frame.model().project().conditions().air().temperature());
+        window.tabbedPane("tabs").selectTab(1);
+        window.textBox("air.inletTemperature").setText(Quantities.format(t + 3, Dimension.TEMPERATURE,
+                UnitSystem.SI));
+        awaitCondition("conditions edited", () -> frame.model().project().conditions().air().temperature() != t);
+        window.tabbedPane("tabs").selectTab(SEARCH_TAB);
+        window.label("study.search.outOfDate").requireVisible().requireText(Messages.get("study.search.outOfDate"));
+        window.table("study.search.table").requireRowCount(5);
+        // undone, the list fits the conditions again; the constraints changed, it is out of date again
+        window.button("toolbar.undo").click();
+        awaitCondition("undone", () -> frame.model().project().conditions().air().temperature() == t);
+        assertThat(onEdt(panel::outOfDate)).isFalse();
+        GuiActionRunner.execute(() -> {
+            Project p = frame.model().project();
+            Constraints k = p.constraints();
+            frame.model().edit(p.withConstraints(new Constraints(k.maxFaceWidth(), k.maxFaceHeight(), k.maxDepth(),
+                    k.circuits(), k.requiredCapacity() + 1000, k.fanCurve(), k.room())), frame.model().selected());
+        });
+        assertThat(onEdt(panel::outOfDate)).isTrue();
+        window.button("study.search.run").click();
+        awaitCondition("searched again", () -> !panel.running() && panel.result() != null
+                && panel.result().requirement().capacity() == frame.model().project().constraints().requiredCapacity());
+        assertThat(onEdt(panel::outOfDate)).isFalse();
+    }
+
+    @Test
     void aBadLimitIsRefusedNamingTheField() {
         window.tabbedPane("tabs").selectTab(SEARCH_TAB);
         SearchPanel panel = (SearchPanel) window.panel("study.search").target();
@@ -201,6 +245,41 @@ class WorkbenchStudyGuiTest {
         assertThat(window.textBox("study.sensitivity.explanation").text())
                 .contains(Explanation.forCoil(expected).get(0));
         shot("16-sensitivity");
+    }
+
+    @Test
+    void cancelStopsTheStepsShowsNoResultAndReEnablesRun() {
+        window.tabbedPane("tabs").selectTab(SENSITIVITY_TAB);
+        SensitivityPanel panel = (SensitivityPanel) window.panel("study.sensitivity").target();
+        window.button("study.sensitivity.cancel").requireDisabled();
+        window.button("study.sensitivity.run").click();
+        awaitCondition("stepped", () -> !panel.running() && panel.result() != null);
+        // a second run, cancelled at once through the button: the earlier result goes too
+        JButton cancel = window.button("study.sensitivity.cancel").target();
+        boolean[] enabledWhileRunning = new boolean[2];
+        GuiActionRunner.execute(() -> {
+            panel.run();
+            enabledWhileRunning[0] = cancel.isEnabled();
+            enabledWhileRunning[1] = window.button("study.sensitivity.run").target().isEnabled();
+            cancel.doClick();
+        });
+        assertThat(enabledWhileRunning).containsExactly(true, false);
+        assertThat(onEdt(panel::running)).isFalse();
+        Pause.pause(500);
+        assertThat(onEdt(panel::result)).isNull();
+        assertThat(onEdt(panel::bars)).isEmpty();
+        window.table("study.sensitivity.table").requireRowCount(0);
+        window.textBox("study.sensitivity.explanation").requireText("");
+        window.label("study.sensitivity.status").requireText(Messages.get("study.sensitivity.cancelled"));
+        window.button("study.sensitivity.run").requireEnabled();
+        window.button("study.sensitivity.cancel").requireDisabled();
+        JProgressBar bar = window.robot().finder().findByName(panel, "study.sensitivity.progress",
+                JProgressBar.class, false);
+        assertThat(onEdt(bar::isVisible)).isFalse();
+        // and the tab works again
+        window.button("study.sensitivity.run").click();
+        awaitCondition("stepped again", () -> !panel.running() && panel.result() != null);
+        assertThat(onEdt(bar::isVisible)).isFalse();
     }
 
     @Test

@@ -5,6 +5,7 @@ import java.util.Comparator;
 import java.util.List;
 import java.util.Objects;
 import java.util.Set;
+import java.util.concurrent.CancellationException;
 import org.finstack.coil.CoilCase;
 import org.finstack.coil.CoilModels;
 import org.finstack.coil.FoulingResistances;
@@ -13,6 +14,7 @@ import org.finstack.coil.RefrigerantSide;
 import org.finstack.core.FinstackException;
 import org.finstack.material.Material;
 import org.finstack.material.Materials;
+import org.finstack.study.Progress;
 import org.finstack.study.Sweep;
 
 /**
@@ -120,17 +122,38 @@ public final class Sensitivity {
     }
 
     /**
-     * Steps each input of a case.
+     * Steps each input of a case, with no progress reports.
      *
      * @param base the case
      * @return the base rating and the effects, sorted
      * @throws FinstackException if the base case itself cannot be rated
      */
     public static Result of(CoilCase base) {
+        return of(base, Progress.NONE);
+    }
+
+    /**
+     * Steps each input of a case. The ratings are the base, one per {@link Input} and, when the
+     * case has air-side fouling, the cleaned coil; {@code progress} is told after each of them.
+     *
+     * @param base     the case
+     * @param progress told after each rating; asked before each rating whether to stop
+     * @return the base rating and the effects, sorted
+     * @throws FinstackException if the base case itself cannot be rated
+     * @throws CancellationException when {@code progress} asked to stop
+     */
+    public static Result of(CoilCase base, Progress progress) {
         Objects.requireNonNull(base, "base");
+        Objects.requireNonNull(progress, "progress");
+        boolean fouled = base.fouling().airSide() > 0;
+        int total = 1 + Input.values().length + (fouled ? 1 : 0);
+        int done = 0;
+        stopIfCancelled(progress);
         Rating r0 = CoilModels.rate(base);
+        progress.step(++done, total);
         List<Effect> effects = new ArrayList<>();
         for (Input in : Input.values()) {
+            stopIfCancelled(progress);
             String step = in.step();
             if (in == Input.TUBE_MATERIAL && !COPPERS.contains(base.coil().tubeMaterial().id())) {
                 step = "copper tubes in place of " + base.coil().tubeMaterial().id();
@@ -140,12 +163,14 @@ public final class Sensitivity {
             } catch (FinstackException e) {
                 effects.add(new Effect(in, step, null, e.getMessage(), 0, 0, 0, 0));
             }
+            progress.step(++done, total);
         }
         effects.sort(Comparator.comparing((Effect e) -> !e.rated())
                 .thenComparing(Comparator.comparingDouble((Effect e) -> Math.abs(e.capacityFraction())).reversed())
                 .thenComparing(Comparator.comparingDouble((Effect e) -> Math.abs(e.airPressureDropFraction())).reversed()));
         Effect cleaning = null;
-        if (base.fouling().airSide() > 0) {
+        if (fouled) {
+            stopIfCancelled(progress);
             String step = "cleaning the fins (no air-side fouling)";
             FoulingResistances f = base.fouling();
             try {
@@ -154,6 +179,7 @@ public final class Sensitivity {
             } catch (FinstackException e) {
                 cleaning = new Effect(Input.AIR_FOULING, step, null, e.getMessage(), 0, 0, 0, 0);
             }
+            progress.step(++done, total);
         }
         return new Result(base, r0, effects, cleaning);
     }
@@ -192,6 +218,12 @@ public final class Sensitivity {
 
     private static Material otherTube(Material m) {
         return Materials.library().tube("coil.tubeMaterial", COPPERS.contains(m.id()) ? "aluminium-3003" : "copper");
+    }
+
+    private static void stopIfCancelled(Progress progress) {
+        if (progress.cancelled()) {
+            throw new CancellationException("sensitivity cancelled");
+        }
     }
 
     private static Effect effect(Input in, String step, Rating base, Rating r) {

@@ -1,13 +1,18 @@
 package org.finstack.study.explain;
 
 import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
+import java.util.concurrent.CancellationException;
+import java.util.concurrent.atomic.AtomicInteger;
 import org.finstack.coil.CoilCase;
 import org.finstack.coil.CoilModels;
 import org.finstack.io.CaseFiles;
 import org.finstack.io.ProjectFiles;
+import org.finstack.study.Progress;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -74,5 +79,48 @@ class SensitivityTest {
         assertThat(s.cleaning()).isNotNull();
         assertThat(s.cleaning().capacityChange()).isPositive();
         assertThat(Sensitivity.of(CASES.get(0)).cleaning()).isNull();
+    }
+
+    @Test
+    void progressRisesOneStepPerRatingToTheTotal() {
+        for (int i = 0; i < 2; i++) {
+            CoilCase c = CASES.get(i);
+            List<int[]> steps = new ArrayList<>();
+            Sensitivity.Result s = Sensitivity.of(c, new Progress() {
+                @Override
+                public void step(int done, int total) {
+                    steps.add(new int[] {done, total});
+                }
+
+                @Override
+                public boolean cancelled() {
+                    return false;
+                }
+            });
+            int total = 1 + Sensitivity.Input.values().length + (s.cleaning() == null ? 0 : 1);
+            assertThat(steps).as("case " + i).hasSize(total);
+            for (int k = 0; k < total; k++) {
+                assertThat(steps.get(k)).as("case " + i + " step " + k).containsExactly(k + 1, total);
+            }
+        }
+    }
+
+    @Test
+    void cancellingAfterTheSecondRatingStopsTheSteps() {
+        AtomicInteger ratings = new AtomicInteger();
+        Progress stopAfterTwo = new Progress() {
+            @Override
+            public void step(int done, int total) {
+                ratings.incrementAndGet();
+            }
+
+            @Override
+            public boolean cancelled() {
+                return ratings.get() >= 2;
+            }
+        };
+        assertThatThrownBy(() -> Sensitivity.of(CASES.get(1), stopAfterTwo))
+                .isInstanceOf(CancellationException.class);
+        assertThat(ratings.get()).isEqualTo(2).isLessThan(Sensitivity.Input.values().length);
     }
 }
