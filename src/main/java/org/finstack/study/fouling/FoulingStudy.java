@@ -47,6 +47,13 @@ public final class FoulingStudy {
     /** Absolute tolerance of the inferred thickness [m]. */
     public static final double THICKNESS_TOLERANCE = 1e-9;
 
+    /**
+     * Fields of the refusals that say the fan finds no operating point: the coil's drop above the
+     * curve's first point ({@link org.finstack.study.fan.FanCurve}) or above shut-off
+     * ({@link FanInLoop}).
+     */
+    private static final Set<String> NO_OPERATING_POINT = Set.of("systemCurve", "fan");
+
     private FoulingStudy() {
     }
 
@@ -86,7 +93,9 @@ public final class FoulingStudy {
      * @param maxThickness the last level's deposit thickness [m]
      * @param levels       number of levels, 2 to 200, the first clean
      * @param progress     hears of each level done; checked for cancellation before each level
-     * @return the curve
+     * @return the curve; where the fan finds no operating point at a level (the deposit has choked
+     *         it, or the airflow has left the part of its curve given), the curve ends at the
+     *         level before, with a note saying so
      * @throws CancellationException when {@code progress} asks to stop
      */
     public static FoulingCurve curve(CoilCase clean, CoilFan fan, double conductivity, double maxThickness,
@@ -97,6 +106,7 @@ public final class FoulingStudy {
             throw new InputException("levels", Msg.OUT_OF_BOUNDS, (double) levels, 2.0, 200.0);
         }
         Set<String> warnings = new LinkedHashSet<>(FoulingSusceptibility.warnings(clean.coil()));
+        List<String> notes = new ArrayList<>(notes(fan));
         List<FoulingPoint> points = new ArrayList<>();
         FoulingPoint first = null;
         double guess = 0;
@@ -105,7 +115,19 @@ public final class FoulingStudy {
                 throw new CancellationException("fouling curve cancelled");
             }
             FoulingLevel level = new FoulingLevel(maxThickness * i / (levels - 1), conductivity);
-            FoulingPoint p = point(clean, fan, level, guess, first, warnings);
+            FoulingPoint p;
+            try {
+                p = point(clean, fan, level, guess, first, warnings);
+            } catch (InputException e) {
+                if (first == null || !NO_OPERATING_POINT.contains(e.field())) {
+                    throw e;
+                }
+                // the coil has choked the fan (or left its curve): the levels before still stand
+                notes.add(String.format(Locale.ROOT, "the curve ends at %.3g mm of deposit: at %.3g mm the fan no "
+                        + "longer finds an operating point (%s)", points.get(points.size() - 1).thickness() * 1e3,
+                        level.thickness() * 1e3, e.getMessage()));
+                break;
+            }
             if (first == null) {
                 first = p;
             }
@@ -113,7 +135,7 @@ public final class FoulingStudy {
             points.add(p);
             progress.step(i + 1, levels);
         }
-        return new FoulingCurve(points, notes(fan), new ArrayList<>(warnings));
+        return new FoulingCurve(points, notes, new ArrayList<>(warnings));
     }
 
     /**

@@ -55,6 +55,22 @@ class FoulingStudyTest {
     }
 
     @Test
+    void aCurveTheDepositPushesOffTheFanCurveEndsThereWithANote() {
+        // invented fan curve given only from 0.5 to 0.8 m3/s around the clean point (0.6 m3/s): the
+        // heavy deposit pulls the airflow below its first point, where nothing may be extrapolated
+        CoilFan narrow = new CoilFan.Curve(new FanCurve(new double[] {0.5, 0.8}, new double[] {1.3 * cleanDp, 0.1 * cleanDp}));
+        FoulingStudy.FoulingCurve curve = FoulingStudy.curve(condenser, narrow, FoulingLevel.DUST_CONDUCTIVITY,
+                FoulingStudy.heavyThickness(condenser), 6);
+        List<FoulingStudy.FoulingPoint> p = curve.points();
+        assertThat(p.size()).isBetween(2, 5);
+        assertThat(p).allSatisfy(x -> assertThat(x.airflow()).isGreaterThanOrEqualTo(0.5));
+        for (int i = 1; i < p.size(); i++) {
+            assertThat(p.get(i).capacity()).isLessThan(p.get(i - 1).capacity());
+        }
+        assertThat(curve.notes()).anyMatch(n -> n.startsWith("the curve ends at") && n.contains("fan"));
+    }
+
+    @Test
     void withoutAFanTheAirflowIsHeldAndTheLossIsSmaller() {
         double heavy = FoulingStudy.heavyThickness(condenser);
         FoulingStudy.FoulingCurve held = FoulingStudy.curve(condenser, null, FoulingLevel.DUST_CONDUCTIVITY, heavy, 3);
