@@ -170,7 +170,7 @@ final class ConditionsForm extends JPanel {
                 q("refrigerant.insideCoefficient", Dimension.HEAT_TRANSFER_COEFFICIENT),
                 Messages.get("conditions.insideCoefficient.help"));
         fields.get("refrigerant.insideCoefficient").putClientProperty(FlatClientProperties.PLACEHOLDER_TEXT,
-                Messages.get("conditions.insideCoefficient.placeholder"));
+                Messages.get("conditions.insideCoefficient.hint"));
         fields.get("refrigerant.liquidTemperature").putClientProperty(FlatClientProperties.PLACEHOLDER_TEXT,
                 Messages.get("conditions.notGiven"));
         fields.get("refrigerant.inletTemperature").putClientProperty(FlatClientProperties.PLACEHOLDER_TEXT,

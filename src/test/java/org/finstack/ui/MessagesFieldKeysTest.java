@@ -6,7 +6,10 @@ import java.util.ArrayList;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 
-/** The keys the fouling and diagnosis tabs build from names exist in Messages.properties. */
+/**
+ * Invariant of the catalogue: every key the fouling and diagnosis tabs build from names exists in
+ * Messages.properties.
+ */
 class MessagesFieldKeysTest {
 
     @Test

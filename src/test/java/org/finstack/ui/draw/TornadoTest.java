@@ -14,7 +14,9 @@ import org.junit.jupiter.api.Test;
 /**
  * The tornado chart puts the largest effect first whatever its sign, scales the largest bar to
  * the full half-width and the others in proportion, draws gains right and losses left of one
- * zero line, and paints each bar in its colour where the geometry says it is.
+ * zero line, and paints each bar in its colour where the geometry says it is. These are invariants
+ * of the chart's own layout; the effects themselves are checked against the study in
+ * WorkbenchStudyGuiTest.
  */
 class TornadoTest {
 
