@@ -2,30 +2,23 @@ package org.finstack.ui;
 
 import com.formdev.flatlaf.util.UIScale;
 import java.awt.BorderLayout;
-import java.awt.Color;
-import java.awt.FlowLayout;
 import java.awt.event.MouseEvent;
 import java.util.List;
 import java.util.Locale;
-import java.util.concurrent.CancellationException;
-import java.util.concurrent.ExecutionException;
 import javax.swing.BorderFactory;
 import javax.swing.JButton;
 import javax.swing.JLabel;
 import javax.swing.JPanel;
-import javax.swing.JProgressBar;
 import javax.swing.JScrollPane;
 import javax.swing.JTable;
 import javax.swing.JTextArea;
 import javax.swing.ListSelectionModel;
-import javax.swing.SwingWorker;
 import javax.swing.table.AbstractTableModel;
 import org.finstack.core.FinstackException;
 import org.finstack.core.InputException;
 import org.finstack.core.Msg;
 import org.finstack.study.Option;
 import org.finstack.study.Overrides;
-import org.finstack.study.Progress;
 import org.finstack.study.Project;
 import org.finstack.study.search.CandidateResult;
 import org.finstack.study.search.CandidateSearch;
@@ -51,11 +44,9 @@ final class SearchPanel extends JPanel {
 
     private final ProjectModel model;
     private final QuantityField limit = new QuantityField("study.search.limit", Dimension.DIMENSIONLESS, true);
-    private final JButton run = new JButton(Messages.get("study.search.run"));
-    private final JButton cancel = new JButton(Messages.get("study.search.cancel"));
     private final JButton add = new JButton(Messages.get("study.search.add"));
-    private final JProgressBar progress = new JProgressBar(0, 100);
-    private final JLabel status = new JLabel(Messages.get("study.search.intro"));
+    private final StudyRun run = new StudyRun("study.search", Messages.get("study.search.run"),
+            Messages.get("study.search.cancel"), this::run);
     private final JLabel requirement = new JLabel(" ");
     private final JLabel outOfDate = new JLabel(Messages.get("study.search.outOfDate"));
     private final JTextArea notes = new JTextArea(3, 60);
@@ -69,8 +60,6 @@ final class SearchPanel extends JPanel {
             return r < 0 ? null : rows.shown.get(convertRowIndexToModel(r)).candidate().description();
         }
     };
-    private final Color normal = status.getForeground();
-    private SwingWorker<SearchResult, Void> worker;
     private SearchResult result;
     /** The project the listed result was searched for, or null. */
     private Project searched;
@@ -82,30 +71,21 @@ final class SearchPanel extends JPanel {
         limit.setColumns(5);
         limit.show(20, model.units());
         limit.setToolTipText(Messages.get("study.search.limitTip"));
-        run.setName("study.search.run");
-        cancel.setName("study.search.cancel");
         add.setName("study.search.add");
-        progress.setName("study.search.progress");
-        status.setName("study.search.status");
         requirement.setName("study.search.requirement");
         outOfDate.setName("study.search.outOfDate");
         outOfDate.setVisible(false);
         table.setName("study.search.table");
         notes.setName("study.search.notes");
-        cancel.setEnabled(false);
         add.setEnabled(false);
-        JPanel controls = new JPanel(new FlowLayout(FlowLayout.LEFT, UIScale.scale(6), UIScale.scale(4)));
-        controls.add(new JLabel(Messages.get("study.search.limit")));
-        controls.add(limit);
-        controls.add(run);
-        controls.add(cancel);
-        controls.add(progress);
-        controls.add(add);
+        run.before(new JLabel(Messages.get("study.search.limit")), limit).after(add)
+                .whenCancelled(() -> run.say(Messages.get("study.search.cancelled")));
+        run.say(Messages.get("study.search.intro"));
         JPanel north = new JPanel(new BorderLayout());
-        north.add(controls, BorderLayout.NORTH);
+        north.add(run, BorderLayout.NORTH);
         JPanel lines = new JPanel(new java.awt.GridLayout(2, 1));
         lines.setBorder(BorderFactory.createEmptyBorder(0, UIScale.scale(8), UIScale.scale(4), UIScale.scale(8)));
-        lines.add(status);
+        lines.add(run.status());
         lines.add(requirement);
         north.add(lines, BorderLayout.SOUTH);
         add(north, BorderLayout.NORTH);
@@ -123,8 +103,6 @@ final class SearchPanel extends JPanel {
         notes.setWrapStyleWord(true);
         notes.setText(Messages.get("study.search.caution"));
         add(new JScrollPane(notes), BorderLayout.SOUTH);
-        run.addActionListener(e -> run());
-        cancel.addActionListener(e -> cancel());
         add.addActionListener(e -> addSelected());
         model.addListener(c -> {
             if (c == ProjectModel.Change.PROJECT) {
@@ -151,75 +129,23 @@ final class SearchPanel extends JPanel {
             max = (int) v;
         } catch (FinstackException e) {
             limit.showError(e.getMessage());
-            problem(e.getMessage());
+            run.problem(e.getMessage());
             return;
         }
-        cancel();
         Project project = model.project();
-        SwingWorker<SearchResult, Void> w = new SwingWorker<>() {
-            @Override
-            protected SearchResult doInBackground() {
-                return CandidateSearch.run(project, new Progress() {
-                    @Override
-                    public void step(int done, int total) {
-                        setProgress(total == 0 ? 100 : done * 100 / total);
-                    }
-
-                    @Override
-                    public boolean cancelled() {
-                        return isCancelled();
-                    }
-                });
-            }
-
-            @Override
-            protected void done() {
-                if (worker != this) {
-                    return;
-                }
-                running(false);
-                if (isCancelled()) {
-                    say(Messages.get("study.search.cancelled"));
-                    return;
-                }
-                try {
-                    show(get(), max, project);
-                } catch (InterruptedException e) {
-                    Thread.currentThread().interrupt();
-                } catch (CancellationException e) {
-                    say(Messages.get("study.search.cancelled"));
-                } catch (ExecutionException e) {
-                    if (e.getCause() instanceof FinstackException fe) {
-                        problem(Messages.format("study.search.failed", fe.getMessage()));
-                    } else {
-                        Thread t = Thread.currentThread();
-                        t.getUncaughtExceptionHandler().uncaughtException(t, e.getCause());
-                    }
-                }
-            }
-        };
-        w.addPropertyChangeListener(e -> {
-            if ("progress".equals(e.getPropertyName()) && worker == w) {
-                progress.setValue((Integer) e.getNewValue());
-            }
-        });
-        worker = w;
-        progress.setValue(0);
-        running(true);
-        say(Messages.get("study.search.running"));
-        w.execute();
+        run.start(Messages.get("study.search.running"), p -> CandidateSearch.run(project, p),
+                r -> show(r, max, project),
+                e -> run.problem(Messages.format("study.search.failed", e.getMessage())));
     }
 
     /** Stops the search under way, if any: its workers stop between candidates and nothing is listed. */
     void cancel() {
-        if (worker != null && !worker.isDone()) {
-            worker.cancel(true);
-        }
+        run.cancel();
     }
 
     /** @return whether a search is under way */
     boolean running() {
-        return worker != null && !worker.isDone();
+        return run.running();
     }
 
     /** @return the last search's full result, or null */
@@ -252,7 +178,7 @@ final class SearchPanel extends JPanel {
         Project next = model.project().addOption(new Option(c.candidate().name(), c.candidate().coil(),
                 Overrides.NONE));
         model.edit(next, next.allOptions().size() - 1);
-        say(Messages.format("study.search.added", c.candidate().name()));
+        run.say(Messages.format("study.search.added", c.candidate().name()));
     }
 
     private void show(SearchResult r, int max, Project project) {
@@ -264,7 +190,7 @@ final class SearchPanel extends JPanel {
         rows.fireTableDataChanged();
         add.setEnabled(false);
         showRequirement();
-        say(Messages.format("study.search.summary", r.generated(), r.rated(), r.failed(), r.meeting(),
+        run.say(Messages.format("study.search.summary", r.generated(), r.rated(), r.failed(), r.meeting(),
                 r.paretoOptimal(), rows.shown.size(), String.format(Locale.ROOT, "%.2f", r.seconds())));
         StringBuilder b = new StringBuilder(Messages.get("study.search.caution"));
         r.notes().forEach(n -> b.append('\n').append(Messages.format("study.search.note", n)));
@@ -285,24 +211,6 @@ final class SearchPanel extends JPanel {
         requirement.setText(q.capacity() > 0 ? Messages.format("study.search.requirement",
                 Quantities.format(q.capacity(), Dimension.HEAT_FLOW, model.units()), q.basis())
                 : Messages.format("study.search.noRequirement", q.basis()));
-    }
-
-    private void running(boolean on) {
-        run.setEnabled(!on);
-        cancel.setEnabled(on);
-        if (!on) {
-            progress.setValue(0);
-        }
-    }
-
-    private void say(String text) {
-        status.setForeground(normal);
-        status.setText(text);
-    }
-
-    private void problem(String text) {
-        status.setForeground(Theme.color("Finstack.error", normal));
-        status.setText(text);
     }
 
     /** The candidates listed, as text in the current units. */

@@ -2,31 +2,23 @@ package org.finstack.ui;
 
 import com.formdev.flatlaf.util.UIScale;
 import java.awt.BorderLayout;
-import java.awt.Color;
 import java.awt.Dimension;
-import java.awt.FlowLayout;
 import java.awt.Graphics;
 import java.awt.Graphics2D;
 import java.awt.geom.Rectangle2D;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import java.util.concurrent.ExecutionException;
 import javax.swing.BorderFactory;
-import javax.swing.JButton;
 import javax.swing.JComponent;
-import javax.swing.JLabel;
 import javax.swing.JPanel;
-import javax.swing.JProgressBar;
 import javax.swing.JScrollPane;
 import javax.swing.JSplitPane;
 import javax.swing.JTable;
 import javax.swing.JTextArea;
-import javax.swing.SwingWorker;
 import javax.swing.table.AbstractTableModel;
 import org.finstack.coil.CoilCase;
 import org.finstack.core.FinstackException;
-import org.finstack.study.Progress;
 import org.finstack.study.explain.Explanation;
 import org.finstack.study.explain.Sensitivity;
 import org.finstack.ui.draw.Tornado;
@@ -48,17 +40,12 @@ final class SensitivityPanel extends JPanel {
     static final List<String> COLUMNS = List.of("input", "step", "capacity", "airPressureDrop");
 
     private final ProjectModel model;
-    private final JButton run = new JButton(Messages.get("study.sensitivity.run"));
-    private final JButton cancel = new JButton(Messages.get("study.sensitivity.cancel"));
-    private final JProgressBar progress = new JProgressBar(0, 100);
-    private final JLabel status = new JLabel(Messages.get("study.sensitivity.intro"));
+    private final StudyRun run = new StudyRun("study.sensitivity", Messages.get("study.sensitivity.run"),
+            Messages.get("study.sensitivity.cancel"), this::run);
     private final Chart chart = new Chart();
     private final Rows rows = new Rows();
     private final JTable table = new JTable(rows);
     private final JTextArea words = new JTextArea(5, 60);
-    private final Color normal = status.getForeground();
-    /** The run whose result is still to be shown, or null. */
-    private SwingWorker<Sensitivity.Result, Void> worker;
     private Sensitivity.Result result;
     private String optionName;
 
@@ -66,23 +53,16 @@ final class SensitivityPanel extends JPanel {
         super(new BorderLayout(0, UIScale.scale(4)));
         this.model = model;
         setName("study.sensitivity");
-        run.setName("study.sensitivity.run");
-        cancel.setName("study.sensitivity.cancel");
-        progress.setName("study.sensitivity.progress");
-        status.setName("study.sensitivity.status");
         table.setName("study.sensitivity.table");
         words.setName("study.sensitivity.explanation");
         chart.setName("study.sensitivity.tornado");
-        progress.setVisible(false);
-        cancel.setEnabled(false);
-        JPanel controls = new JPanel(new FlowLayout(FlowLayout.LEFT, UIScale.scale(6), UIScale.scale(4)));
-        controls.add(run);
-        controls.add(cancel);
-        controls.add(progress);
+        run.progressOnlyWhileRunning().whenCancelled(this::cancelled);
+        run.say(Messages.get("study.sensitivity.intro"));
         JPanel north = new JPanel(new BorderLayout());
-        north.add(controls, BorderLayout.NORTH);
-        status.setBorder(BorderFactory.createEmptyBorder(0, UIScale.scale(8), UIScale.scale(4), UIScale.scale(8)));
-        north.add(status, BorderLayout.SOUTH);
+        north.add(run, BorderLayout.NORTH);
+        run.status().setBorder(BorderFactory.createEmptyBorder(0, UIScale.scale(8), UIScale.scale(4),
+                UIScale.scale(8)));
+        north.add(run.status(), BorderLayout.SOUTH);
         add(north, BorderLayout.NORTH);
         words.setEditable(false);
         words.setLineWrap(true);
@@ -94,13 +74,11 @@ final class SensitivityPanel extends JPanel {
         JSplitPane split = new JSplitPane(JSplitPane.VERTICAL_SPLIT, chart, below);
         split.setResizeWeight(0.5);
         add(split, BorderLayout.CENTER);
-        run.addActionListener(e -> run());
-        cancel.addActionListener(e -> cancel());
         model.addListener(c -> {
             if (c == ProjectModel.Change.UNITS) {
                 rows.fireTableDataChanged();
                 if (result != null) {
-                    status.setText(baseLine(result));
+                    run.say(baseLine(result));
                 }
             }
         });
@@ -108,67 +86,18 @@ final class SensitivityPanel extends JPanel {
 
     /** Steps each input of the selected option's case, in a worker. */
     void run() {
-        if (worker != null) {
-            worker.cancel(true);
-            worker = null;
-            running(false);
-        }
         String name = model.option().name();
         CoilCase base;
         try {
             base = model.project().caseOf(model.selected());
         } catch (FinstackException e) {
-            problem(Messages.format("study.sensitivity.failed", name, e.getMessage()));
+            run.cancel();
+            run.problem(Messages.format("study.sensitivity.failed", name, e.getMessage()));
             return;
         }
-        SwingWorker<Sensitivity.Result, Void> w = new SwingWorker<>() {
-            @Override
-            protected Sensitivity.Result doInBackground() {
-                return Sensitivity.of(base, new Progress() {
-                    @Override
-                    public void step(int done, int total) {
-                        setProgress(done * 100 / total);
-                    }
-
-                    @Override
-                    public boolean cancelled() {
-                        return isCancelled();
-                    }
-                });
-            }
-
-            @Override
-            protected void done() {
-                if (worker != this) {
-                    return;
-                }
-                worker = null;
-                running(false);
-                try {
-                    show(name, get());
-                } catch (InterruptedException e) {
-                    Thread.currentThread().interrupt();
-                } catch (ExecutionException e) {
-                    if (e.getCause() instanceof FinstackException fe) {
-                        problem(Messages.format("study.sensitivity.failed", name, fe.getMessage()));
-                    } else {
-                        Thread t = Thread.currentThread();
-                        t.getUncaughtExceptionHandler().uncaughtException(t, e.getCause());
-                    }
-                }
-            }
-        };
-        w.addPropertyChangeListener(e -> {
-            if ("progress".equals(e.getPropertyName()) && worker == w) {
-                progress.setValue((Integer) e.getNewValue());
-            }
-        });
-        worker = w;
-        progress.setValue(0);
-        running(true);
-        status.setForeground(normal);
-        status.setText(Messages.format("study.sensitivity.running", name));
-        w.execute();
+        run.start(Messages.format("study.sensitivity.running", name), p -> Sensitivity.of(base, p),
+                r -> show(name, r),
+                e -> run.problem(Messages.format("study.sensitivity.failed", name, e.getMessage())));
     }
 
     /**
@@ -176,24 +105,12 @@ final class SensitivityPanel extends JPanel {
      * result, not even an earlier one, until the steps are run again.
      */
     void cancel() {
-        if (worker == null) {
-            return;
-        }
-        worker.cancel(true);
-        worker = null;
-        running(false);
-        result = null;
-        chart.bars = List.of();
-        chart.repaint();
-        rows.fireTableDataChanged();
-        words.setText("");
-        status.setForeground(normal);
-        status.setText(Messages.get("study.sensitivity.cancelled"));
+        run.cancel();
     }
 
     /** @return whether a run is under way (its result still to be shown) */
     boolean running() {
-        return worker != null;
+        return run.running();
     }
 
     /** @return the last result, or null */
@@ -228,8 +145,7 @@ final class SensitivityPanel extends JPanel {
         chart.revalidate();
         chart.repaint();
         rows.fireTableDataChanged();
-        status.setForeground(normal);
-        status.setText(baseLine(r));
+        run.say(baseLine(r));
         List<String> lines = Explanation.forCoil(r);
         words.setText(Messages.get("study.sensitivity.inWords") + "\n\u2022 " + String.join("\n\u2022 ", lines));
         words.setCaretPosition(0);
@@ -242,15 +158,13 @@ final class SensitivityPanel extends JPanel {
                         org.finstack.units.Dimension.PRESSURE_DIFFERENCE, u), r.baseRating().model());
     }
 
-    private void running(boolean on) {
-        run.setEnabled(!on);
-        cancel.setEnabled(on);
-        progress.setVisible(on);
-    }
-
-    private void problem(String text) {
-        status.setForeground(Theme.color("Finstack.error", normal));
-        status.setText(text);
+    private void cancelled() {
+        result = null;
+        chart.bars = List.of();
+        chart.repaint();
+        rows.fireTableDataChanged();
+        words.setText("");
+        run.say(Messages.get("study.sensitivity.cancelled"));
     }
 
     private static String percent(double fraction) {

@@ -1,11 +1,12 @@
 package org.finstack.ui;
 
 import com.formdev.flatlaf.util.UIScale;
+import java.awt.Color;
 import java.awt.FlowLayout;
-import java.util.concurrent.CancellationException;
 import java.util.concurrent.ExecutionException;
 import java.util.function.Consumer;
 import javax.swing.JButton;
+import javax.swing.JComponent;
 import javax.swing.JLabel;
 import javax.swing.JPanel;
 import javax.swing.JProgressBar;
@@ -16,9 +17,10 @@ import org.finstack.study.Progress;
 /**
  * A Run button, a Cancel button, a progress bar and a one-line status for a study that runs in a
  * {@link SwingWorker}, never on the event thread. The study sees a {@link Progress} whose
- * cancellation is the worker's; Cancel stops it between its steps. A refusal
+ * cancellation is the worker's; Cancel stops it between its steps and drops its result. A refusal
  * ({@link FinstackException}) goes to the panel's handler as the study's own message; anything
- * else to the thread's uncaught-exception handler (the workbench's crash guard).
+ * else to the thread's uncaught-exception handler (the workbench's crash guard). A run replaced by
+ * a new one is stopped and reports nothing.
  */
 final class StudyRun extends JPanel {
 
@@ -42,18 +44,37 @@ final class StudyRun extends JPanel {
     private final JButton cancel;
     private final JProgressBar progress = new JProgressBar(0, 100);
     private final JLabel status = new JLabel(" ");
+    private final Color normal = status.getForeground();
+    private boolean progressWhileIdle = true;
+    private Runnable onCancelled = () -> { };
     private SwingWorker<?, Void> worker;
 
     /**
+     * A run whose status stands on the same line, after the progress bar.
+     *
      * @param prefix  the panel's name prefix (components are named {@code prefix.run}, {@code prefix.cancel},
      *                {@code prefix.progress}, {@code prefix.status})
      * @param runText the Run button's text
      * @param onRun   what Run does
      */
     StudyRun(String prefix, String runText, Runnable onRun) {
+        this(prefix, runText, Messages.get("field.cancel"), onRun);
+        add(status);
+    }
+
+    /**
+     * A run whose status line the panel places itself ({@link #status()}).
+     *
+     * @param prefix     the panel's name prefix (components are named {@code prefix.run}, {@code prefix.cancel},
+     *                   {@code prefix.progress}, {@code prefix.status})
+     * @param runText    the Run button's text
+     * @param cancelText the Cancel button's text
+     * @param onRun      what Run does
+     */
+    StudyRun(String prefix, String runText, String cancelText, Runnable onRun) {
         super(new FlowLayout(FlowLayout.LEFT, UIScale.scale(6), UIScale.scale(4)));
         run = new JButton(runText);
-        cancel = new JButton(Messages.get("field.cancel"));
+        cancel = new JButton(cancelText);
         run.setName(prefix + ".run");
         cancel.setName(prefix + ".cancel");
         progress.setName(prefix + ".progress");
@@ -64,11 +85,79 @@ final class StudyRun extends JPanel {
         add(run);
         add(cancel);
         add(progress);
-        add(status);
     }
 
     /**
-     * Starts the work, stopping any still under way (its results are dropped).
+     * @param components put before the Run button, in this order (e.g. a field the study reads)
+     * @return this
+     */
+    StudyRun before(JComponent... components) {
+        for (int i = 0; i < components.length; i++) {
+            add(components[i], i);
+        }
+        return this;
+    }
+
+    /**
+     * @param components put after the progress bar (and the status, when it stands on this line), in this order
+     * @return this
+     */
+    StudyRun after(JComponent... components) {
+        for (JComponent c : components) {
+            add(c);
+        }
+        return this;
+    }
+
+    /**
+     * Shows the progress bar only while work is under way.
+     *
+     * @return this
+     */
+    StudyRun progressOnlyWhileRunning() {
+        progressWhileIdle = false;
+        progress.setVisible(running());
+        return this;
+    }
+
+    /**
+     * @param then what to do on the event thread once Cancel has stopped the work (after the status
+     *             says so), e.g. clear the result shown and say so in the panel's words
+     * @return this
+     */
+    StudyRun whenCancelled(Runnable then) {
+        onCancelled = then;
+        return this;
+    }
+
+    /** @return the one-line status ({@code prefix.status}) */
+    JLabel status() {
+        return status;
+    }
+
+    /**
+     * Says how things stand, in the status line's normal colour.
+     *
+     * @param text the line
+     */
+    void say(String text) {
+        status.setForeground(normal);
+        status.setText(text);
+    }
+
+    /**
+     * Tells of a problem, in the theme's error colour.
+     *
+     * @param text the line
+     */
+    void problem(String text) {
+        status.setForeground(Theme.color("Finstack.error", normal));
+        status.setText(text);
+    }
+
+    /**
+     * Starts the work, stopping any still under way (its results are dropped), the status saying
+     * it is working.
      *
      * @param <T>     what the work gives
      * @param task    the work
@@ -76,8 +165,23 @@ final class StudyRun extends JPanel {
      * @param refused receives a refusal on the event thread
      */
     <T> void start(Task<T> task, Consumer<T> done, Consumer<FinstackException> refused) {
-        if (worker != null && !worker.isDone()) {
-            worker.cancel(true);
+        start(Messages.get("field.status.working"), task, done, refused);
+    }
+
+    /**
+     * Starts the work, stopping any still under way (its results are dropped).
+     *
+     * @param <T>     what the work gives
+     * @param working what the status says while it runs
+     * @param task    the work
+     * @param done    receives the result on the event thread
+     * @param refused receives a refusal on the event thread
+     */
+    <T> void start(String working, Task<T> task, Consumer<T> done, Consumer<FinstackException> refused) {
+        SwingWorker<?, Void> replaced = worker;
+        worker = null;
+        if (replaced != null && !replaced.isDone()) {
+            replaced.cancel(true);
         }
         SwingWorker<T, Void> w = new SwingWorker<>() {
             @Override
@@ -100,29 +204,22 @@ final class StudyRun extends JPanel {
                 if (worker != this) {
                     return;
                 }
+                worker = null;
                 running(false);
-                if (isCancelled()) {
-                    stopped();
-                    return;
-                }
                 try {
                     T result = get();
                     progress.setValue(100);
-                    status.setText(Messages.get("field.status.done"));
+                    say(Messages.get("field.status.done"));
                     done.accept(result);
                 } catch (InterruptedException e) {
                     Thread.currentThread().interrupt();
-                } catch (CancellationException e) {
-                    stopped();
                 } catch (ExecutionException e) {
                     progress.setValue(0);
-                    if (e.getCause() instanceof CancellationException) {
-                        stopped();
-                    } else if (e.getCause() instanceof FinstackException f) {
-                        status.setText(Messages.get("field.status.refused"));
+                    if (e.getCause() instanceof FinstackException f) {
+                        say(Messages.get("field.status.refused"));
                         refused.accept(f);
                     } else {
-                        status.setText(" ");
+                        say(" ");
                         Thread t = Thread.currentThread();
                         t.getUncaughtExceptionHandler().uncaughtException(t, e.getCause());
                     }
@@ -136,30 +233,36 @@ final class StudyRun extends JPanel {
         });
         worker = w;
         progress.setValue(0);
-        status.setText(Messages.get("field.status.working"));
+        say(working);
         running(true);
         w.execute();
     }
 
-    /** Stops the work under way, if any. */
+    /**
+     * Stops the work under way, if any, even when it has finished but its result is still to be
+     * shown: nothing of it is shown.
+     */
     void cancel() {
-        if (worker != null && !worker.isDone()) {
-            worker.cancel(true);
+        if (worker == null) {
+            return;
         }
-    }
-
-    /** @return whether work is under way */
-    boolean running() {
-        return worker != null && !worker.isDone();
-    }
-
-    private void stopped() {
+        SwingWorker<?, Void> stopped = worker;
+        worker = null;
+        stopped.cancel(true);
+        running(false);
         progress.setValue(0);
-        status.setText(Messages.get("field.status.cancelled"));
+        say(Messages.get("field.status.cancelled"));
+        onCancelled.run();
+    }
+
+    /** @return whether work is under way (its result still to be shown) */
+    boolean running() {
+        return worker != null;
     }
 
     private void running(boolean on) {
         run.setEnabled(!on);
         cancel.setEnabled(on);
+        progress.setVisible(on || progressWhileIdle);
     }
 }

@@ -1,27 +1,16 @@
 package org.finstack.ui;
 
 import static org.assertj.core.api.Assertions.assertThat;
-import static org.junit.jupiter.api.Assumptions.assumeFalse;
 
-import java.awt.Graphics2D;
-import java.awt.GraphicsEnvironment;
 import java.awt.image.BufferedImage;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
-import java.util.UUID;
-import java.util.concurrent.Callable;
-import java.util.prefs.BackingStoreException;
-import java.util.prefs.Preferences;
 import javax.imageio.ImageIO;
 import javax.swing.JTable;
-import org.assertj.swing.edt.FailOnThreadViolationRepaintManager;
 import org.assertj.swing.edt.GuiActionRunner;
-import org.assertj.swing.fixture.FrameFixture;
-import org.assertj.swing.timing.Condition;
 import org.assertj.swing.timing.Pause;
-import org.assertj.swing.timing.Timeout;
 import org.finstack.coil.CoilCase;
 import org.finstack.coil.CoilModels;
 import org.finstack.coil.IsothermalCoilModel;
@@ -40,9 +29,6 @@ import org.finstack.study.Sweep;
 import org.finstack.units.Dimension;
 import org.finstack.units.Quantities;
 import org.finstack.units.UnitSystem;
-import org.junit.jupiter.api.AfterEach;
-import org.junit.jupiter.api.BeforeAll;
-import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -60,45 +46,12 @@ import org.junit.jupiter.api.io.TempDir;
  * and every test checks that no rating ran on the event thread. Skipped without a display (CI
  * runs it under Xvfb). Screenshots of the main states go to target/screenshots.
  */
-class WorkbenchGuiTest {
+class WorkbenchGuiTest extends WorkbenchGuiFixture {
 
     private static final Path EXAMPLES = Path.of("examples");
-    private static final Path SHOTS = Path.of("target", "screenshots");
 
     @TempDir
     Path dir;
-
-    private Preferences node;
-    private WorkbenchFrame frame;
-    private FrameFixture window;
-
-    @BeforeAll
-    static void needsDisplay() {
-        assumeFalse(GraphicsEnvironment.isHeadless(), "no display: GUI tests skipped (CI runs them under Xvfb)");
-        FailOnThreadViolationRepaintManager.install();
-    }
-
-    @BeforeEach
-    void open() {
-        node = Preferences.userRoot().node("org/finstack/test-" + UUID.randomUUID());
-        UiPreferences prefs = new UiPreferences(node);
-        frame = GuiActionRunner.execute(() -> Workbench.open(Workbench.demo(), null, prefs, false));
-        window = new FrameFixture(frame);
-        window.resizeTo(new java.awt.Dimension(1280, 820));
-        awaitRated();
-    }
-
-    @AfterEach
-    void close() throws BackingStoreException {
-        if (window != null) {
-            assertThat(onEdt(() -> frame.runner().ratingsOnEventThread())).as("ratings run on the event thread")
-                    .isZero();
-            window.cleanUp();
-        }
-        if (node != null) {
-            node.removeNode();
-        }
-    }
 
     @Test
     void demoOpensAndShowsTheExistingCondensersCapacity() throws IOException {
@@ -502,39 +455,5 @@ class WorkbenchGuiTest {
             }
         }
         throw new AssertionError("no row " + label);
-    }
-
-    private void awaitRated() {
-        awaitCondition("rating finished", () -> !frame.busy() && frame.results().rating() != null);
-    }
-
-    private void awaitCondition(String what, Callable<Boolean> test) {
-        Pause.pause(new Condition(what) {
-            @Override
-            public boolean test() {
-                return onEdt(test);
-            }
-        }, Timeout.timeout(15_000));
-    }
-
-    private static <T> T onEdt(Callable<T> c) {
-        return GuiActionRunner.execute(c);
-    }
-
-    private void shot(String name) {
-        try {
-            Files.createDirectories(SHOTS);
-            BufferedImage img = GuiActionRunner.execute(() -> {
-                BufferedImage i = new BufferedImage(frame.getRootPane().getWidth(), frame.getRootPane().getHeight(),
-                        BufferedImage.TYPE_INT_RGB);
-                Graphics2D g = i.createGraphics();
-                frame.getRootPane().paint(g);
-                g.dispose();
-                return i;
-            });
-            ImageIO.write(img, "png", SHOTS.resolve(name + ".png").toFile());
-        } catch (IOException e) {
-            throw new AssertionError("cannot write screenshot " + name, e);
-        }
     }
 }

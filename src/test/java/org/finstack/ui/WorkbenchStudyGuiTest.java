@@ -1,20 +1,11 @@
 package org.finstack.ui;
 
 import static org.assertj.core.api.Assertions.assertThat;
-import static org.junit.jupiter.api.Assumptions.assumeFalse;
 
-import java.awt.Graphics2D;
-import java.awt.GraphicsEnvironment;
-import java.awt.image.BufferedImage;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
-import java.util.UUID;
-import java.util.concurrent.Callable;
-import java.util.prefs.BackingStoreException;
-import java.util.prefs.Preferences;
-import javax.imageio.ImageIO;
 import javax.swing.JButton;
 import javax.swing.JProgressBar;
 import javax.swing.JTable;
@@ -22,10 +13,7 @@ import javax.swing.SwingWorker;
 import org.apache.pdfbox.Loader;
 import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.text.PDFTextStripper;
-import org.assertj.swing.edt.FailOnThreadViolationRepaintManager;
 import org.assertj.swing.edt.GuiActionRunner;
-import org.assertj.swing.fixture.FrameFixture;
-import org.assertj.swing.timing.Condition;
 import org.assertj.swing.timing.Pause;
 import org.assertj.swing.timing.Timeout;
 import org.finstack.coil.CoilModels;
@@ -44,9 +32,6 @@ import org.finstack.ui.draw.Tornado;
 import org.finstack.units.Dimension;
 import org.finstack.units.Quantities;
 import org.finstack.units.UnitSystem;
-import org.junit.jupiter.api.AfterEach;
-import org.junit.jupiter.api.BeforeAll;
-import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -62,46 +47,13 @@ import org.junit.jupiter.api.io.TempDir;
  * cannot be written is told in a dialog with the reason. A repaint manager fails any Swing access
  * off the event thread. Skipped without a display (CI runs it under Xvfb).
  */
-class WorkbenchStudyGuiTest {
+class WorkbenchStudyGuiTest extends WorkbenchGuiFixture {
 
     private static final int SEARCH_TAB = 6;
     private static final int SENSITIVITY_TAB = 7;
-    private static final Path SHOTS = Path.of("target", "screenshots");
 
     @TempDir
     Path dir;
-
-    private Preferences node;
-    private WorkbenchFrame frame;
-    private FrameFixture window;
-
-    @BeforeAll
-    static void needsDisplay() {
-        assumeFalse(GraphicsEnvironment.isHeadless(), "no display: GUI tests skipped (CI runs them under Xvfb)");
-        FailOnThreadViolationRepaintManager.install();
-    }
-
-    @BeforeEach
-    void open() {
-        node = Preferences.userRoot().node("org/finstack/test-" + UUID.randomUUID());
-        UiPreferences prefs = new UiPreferences(node);
-        frame = GuiActionRunner.execute(() -> Workbench.open(Workbench.demo(), null, prefs, false));
-        window = new FrameFixture(frame);
-        window.resizeTo(new java.awt.Dimension(1280, 820));
-        awaitCondition("rating finished", () -> !frame.busy() && frame.results().rating() != null);
-    }
-
-    @AfterEach
-    void close() throws BackingStoreException {
-        if (window != null) {
-            assertThat(onEdt(() -> frame.runner().ratingsOnEventThread())).as("ratings run on the event thread")
-                    .isZero();
-            window.cleanUp();
-        }
-        if (node != null) {
-            node.removeNode();
-        }
-    }
 
     @Test
     void searchListsTheRankingAndAddsTheChosenCandidateAsAnOption() {
@@ -320,35 +272,5 @@ class WorkbenchStudyGuiTest {
 
     private static String cell(JTable t, int row, String column) {
         return onEdt(() -> t.getValueAt(row, SearchPanel.COLUMNS.indexOf(column)).toString());
-    }
-
-    private void awaitCondition(String what, Callable<Boolean> test) {
-        Pause.pause(new Condition(what) {
-            @Override
-            public boolean test() {
-                return onEdt(test);
-            }
-        }, Timeout.timeout(60_000));
-    }
-
-    private static <T> T onEdt(Callable<T> c) {
-        return GuiActionRunner.execute(c);
-    }
-
-    private void shot(String name) {
-        try {
-            Files.createDirectories(SHOTS);
-            BufferedImage img = GuiActionRunner.execute(() -> {
-                BufferedImage i = new BufferedImage(frame.getRootPane().getWidth(), frame.getRootPane().getHeight(),
-                        BufferedImage.TYPE_INT_RGB);
-                Graphics2D g = i.createGraphics();
-                frame.getRootPane().paint(g);
-                g.dispose();
-                return i;
-            });
-            ImageIO.write(img, "png", SHOTS.resolve(name + ".png").toFile());
-        } catch (IOException e) {
-            throw new AssertionError("cannot write screenshot " + name, e);
-        }
     }
 }

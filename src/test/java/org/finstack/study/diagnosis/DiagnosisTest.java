@@ -6,7 +6,6 @@ import static org.assertj.core.api.Assertions.within;
 import static org.finstack.testing.Reference.assertRelative;
 
 import java.util.concurrent.CancellationException;
-import org.finstack.study.Progress;
 import org.finstack.airside.WangChiChang2000PlainFin;
 import org.finstack.coil.AirInlet;
 import org.finstack.coil.CoilCase;
@@ -23,6 +22,7 @@ import org.finstack.core.InputException;
 import org.finstack.study.cost.CleaningPayback;
 import org.finstack.study.uncertainty.NormalCoverage;
 import org.finstack.testing.Coils;
+import org.finstack.testing.Stopper;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 
@@ -206,32 +206,12 @@ class DiagnosisTest {
     void progressHearsEveryStageAndCancelStopsTheDiagnosis() {
         Stopper all = new Stopper(Integer.MAX_VALUE);
         Diagnosis d = Diagnosis.of(condenser(0), readings(fouled, condenser(0), 0.3), null, all);
-        assertThat(all.done).containsExactly(1, 2, 3, 4, 5, 6, 7, 8, 9);
+        assertThat(all.done()).containsExactly(1, 2, 3, 4, 5, 6, 7, 8, 9);
         assertThat(d.airSideFouling()).isEqualTo(Diagnosis.of(condenser(0), readings(fouled, condenser(0), 0.3), null)
                 .airSideFouling());
         Stopper one = new Stopper(1);
         assertThatThrownBy(() -> Diagnosis.of(condenser(0), readings(fouled, condenser(0), 0.3), null, one))
                 .isInstanceOf(CancellationException.class);
-        assertThat(one.done).containsExactly(1);
-    }
-
-    /** A progress sink that records the steps and asks to stop once {@code stopAfter} are done. */
-    private static final class Stopper implements Progress {
-        final java.util.List<Integer> done = new java.util.ArrayList<>();
-        private final int stopAfter;
-
-        Stopper(int stopAfter) {
-            this.stopAfter = stopAfter;
-        }
-
-        @Override
-        public void step(int d, int total) {
-            done.add(d);
-        }
-
-        @Override
-        public boolean cancelled() {
-            return done.size() >= stopAfter;
-        }
+        assertThat(one.done()).containsExactly(1);
     }
 }

@@ -5,7 +5,6 @@ import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
 import java.util.List;
 import java.util.concurrent.CancellationException;
-import org.finstack.study.Progress;
 import org.finstack.coil.CoilCase;
 import org.finstack.coil.CoilModels;
 import org.finstack.coil.Rating;
@@ -13,6 +12,7 @@ import org.finstack.core.InputException;
 import org.finstack.study.fan.FanCurve;
 import org.finstack.study.fan.FixedSpeedFan;
 import org.finstack.testing.Reference;
+import org.finstack.testing.Stopper;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 
@@ -138,31 +138,11 @@ class FoulingStudyTest {
         Stopper all = new Stopper(Integer.MAX_VALUE);
         FoulingStudy.FoulingCurve curve = FoulingStudy.curve(condenser, null, FoulingLevel.DUST_CONDUCTIVITY, heavy, 4,
                 all);
-        assertThat(all.done).containsExactly(1, 2, 3, 4);
+        assertThat(all.done()).containsExactly(1, 2, 3, 4);
         assertThat(curve).isEqualTo(FoulingStudy.curve(condenser, null, FoulingLevel.DUST_CONDUCTIVITY, heavy, 4));
         Stopper two = new Stopper(2);
         assertThatThrownBy(() -> FoulingStudy.curve(condenser, null, FoulingLevel.DUST_CONDUCTIVITY, heavy, 4, two))
                 .isInstanceOf(CancellationException.class);
-        assertThat(two.done).containsExactly(1, 2);
-    }
-
-    /** A progress sink that records the steps and asks to stop once {@code stopAfter} are done. */
-    private static final class Stopper implements Progress {
-        final java.util.List<Integer> done = new java.util.ArrayList<>();
-        private final int stopAfter;
-
-        Stopper(int stopAfter) {
-            this.stopAfter = stopAfter;
-        }
-
-        @Override
-        public void step(int d, int total) {
-            done.add(d);
-        }
-
-        @Override
-        public boolean cancelled() {
-            return done.size() >= stopAfter;
-        }
+        assertThat(two.done()).containsExactly(1, 2);
     }
 }

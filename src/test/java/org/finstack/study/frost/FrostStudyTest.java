@@ -5,13 +5,13 @@ import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
 import java.util.List;
 import java.util.concurrent.CancellationException;
-import org.finstack.study.Progress;
 import org.finstack.core.InputException;
 import org.finstack.core.Warnings;
 import org.finstack.study.fan.FixedSpeedFan;
 import org.finstack.study.fouling.CoilFan;
 import org.finstack.study.fouling.SmallCoils;
 import org.finstack.testing.Reference;
+import org.finstack.testing.Stopper;
 import org.junit.jupiter.api.Test;
 
 /** Frost properties against their published relations, and the frost march's trends. */
@@ -88,26 +88,6 @@ class FrostStudyTest {
         Stopper three = new Stopper(3);
         assertThatThrownBy(() -> FrostStudy.march(SmallCoils.cooler(), null, 3, 6, FrostStudy.DEFAULT_THRESHOLD, three))
                 .isInstanceOf(CancellationException.class);
-        assertThat(three.done).containsExactly(0, 1, 2);
-    }
-
-    /** A progress sink that records the steps and asks to stop once {@code stopAfter} are done. */
-    private static final class Stopper implements Progress {
-        final java.util.List<Integer> done = new java.util.ArrayList<>();
-        private final int stopAfter;
-
-        Stopper(int stopAfter) {
-            this.stopAfter = stopAfter;
-        }
-
-        @Override
-        public void step(int d, int total) {
-            done.add(d);
-        }
-
-        @Override
-        public boolean cancelled() {
-            return done.size() >= stopAfter;
-        }
+        assertThat(three.done()).containsExactly(0, 1, 2);
     }
 }
