@@ -5,6 +5,7 @@ import java.awt.BorderLayout;
 import java.awt.event.MouseEvent;
 import java.util.List;
 import java.util.Locale;
+import java.util.Objects;
 import javax.swing.BorderFactory;
 import javax.swing.JButton;
 import javax.swing.JLabel;
@@ -79,7 +80,7 @@ final class SearchPanel extends JPanel {
         notes.setName("study.search.notes");
         add.setEnabled(false);
         run.before(new JLabel(Messages.get("study.search.limit")), limit).after(add)
-                .whenCancelled(() -> run.say(Messages.get("study.search.cancelled")));
+                .whenCancelled(this::cancelled);
         run.say(Messages.get("study.search.intro"));
         JPanel north = new JPanel(new BorderLayout());
         north.add(run, BorderLayout.NORTH);
@@ -200,10 +201,29 @@ final class SearchPanel extends JPanel {
         notes.setCaretPosition(0);
     }
 
+    /** A cancelled search lists nothing: the rows of a search before would read as its result. */
+    private void cancelled() {
+        result = null;
+        searched = null;
+        rows.shown = List.of();
+        rows.fireTableDataChanged();
+        add.setEnabled(false);
+        requirement.setText(" ");
+        notes.setText("");
+        markOutOfDate();
+        run.say(Messages.get("study.search.cancelled"));
+    }
+
+    /**
+     * Marks the list when what it was searched for has changed: the conditions, the constraints,
+     * or the existing coil where its capacity was the requirement.
+     */
     private void markOutOfDate() {
         Project now = model.project();
+        boolean requirementFromExisting = searched != null && searched.constraints().requiredCapacity() <= 0;
         outOfDate.setVisible(searched != null && !(searched.conditions().equals(now.conditions())
-                && searched.constraints().equals(now.constraints())));
+                && searched.constraints().equals(now.constraints())
+                && (!requirementFromExisting || Objects.equals(searched.existing(), now.existing()))));
     }
 
     private void showRequirement() {

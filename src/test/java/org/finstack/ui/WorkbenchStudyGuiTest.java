@@ -21,6 +21,7 @@ import org.finstack.coil.Rating;
 import org.finstack.report.ProjectReport;
 import org.finstack.study.Constraints;
 import org.finstack.study.Progress;
+import org.finstack.study.Option;
 import org.finstack.study.Project;
 import org.finstack.study.compare.BandSettings;
 import org.finstack.study.explain.Explanation;
@@ -109,6 +110,11 @@ class WorkbenchStudyGuiTest extends WorkbenchGuiFixture {
     void cancelStopsTheSearchAndListsNothing() {
         window.tabbedPane("tabs").selectTab(SEARCH_TAB);
         SearchPanel panel = (SearchPanel) window.panel("study.search").target();
+        // a search before, whose rows must not stay behind as if they were the cancelled one's
+        window.textBox("study.search.limit").setText("5");
+        window.button("study.search.run").click();
+        awaitCondition("searched", () -> !panel.running() && panel.result() != null);
+        window.table("study.search.table").requireRowCount(5);
         GuiActionRunner.execute(() -> {
             panel.run();
             panel.cancel();
@@ -117,6 +123,7 @@ class WorkbenchStudyGuiTest extends WorkbenchGuiFixture {
         awaitCondition("no search thread left", () -> Thread.getAllStackTraces().keySet().stream()
                 .noneMatch(t -> t.getName().equals("finstack-search") && t.isAlive()));
         assertThat(onEdt(panel::result)).isNull();
+        window.table("study.search.table").requireRowCount(0);
         window.label("study.search.status").requireText(Messages.get("study.search.cancelled"));
         window.button("study.search.run").requireEnabled();
         window.button("study.search.cancel").requireDisabled();
@@ -159,6 +166,31 @@ class WorkbenchStudyGuiTest extends WorkbenchGuiFixture {
         awaitCondition("searched again", () -> !panel.running() && panel.result() != null
                 && panel.result().requirement().capacity() == frame.model().project().constraints().requiredCapacity());
         assertThat(onEdt(panel::outOfDate)).isFalse();
+    }
+
+    @Test
+    void withoutARequiredCapacityAnEditOfTheExistingCoilMarksTheListOutOfDate() {
+        // the requirement is then the existing coil's own capacity (CandidateSearch), so the list
+        // was searched for that coil
+        GuiActionRunner.execute(() -> {
+            Project p = frame.model().project();
+            Constraints k = p.constraints();
+            frame.model().edit(p.withConstraints(new Constraints(k.maxFaceWidth(), k.maxFaceHeight(), k.maxDepth(),
+                    k.circuits(), 0, k.fanCurve(), k.room())), frame.model().selected());
+        });
+        window.tabbedPane("tabs").selectTab(SEARCH_TAB);
+        SearchPanel panel = (SearchPanel) window.panel("study.search").target();
+        window.textBox("study.search.limit").setText("5");
+        window.button("study.search.run").click();
+        awaitCondition("searched", () -> !panel.running() && panel.result() != null);
+        assertThat(onEdt(panel::outOfDate)).isFalse();
+        GuiActionRunner.execute(() -> {
+            Project p = frame.model().project();
+            Option old = p.existing();
+            frame.model().edit(p.withOption(0, new Option(old.name(), old.coil().withRows(old.coil().rows() + 1),
+                    old.overrides())), frame.model().selected());
+        });
+        assertThat(onEdt(panel::outOfDate)).isTrue();
     }
 
     @Test
