@@ -1,9 +1,11 @@
 package org.finstack.fluid;
 
+import static org.finstack.fluid.internal.JsonFields.arr;
+import static org.finstack.fluid.internal.JsonFields.num;
+import static org.finstack.fluid.internal.JsonFields.req;
+import static org.finstack.fluid.internal.JsonFields.text;
+
 import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.ObjectMapper;
-import java.io.IOException;
-import java.io.InputStream;
 import java.util.ArrayList;
 import java.util.List;
 import org.finstack.core.Citation;
@@ -15,6 +17,7 @@ import org.finstack.fluid.eos.IdealGasPart;
 import org.finstack.fluid.eos.NonAnalyticTerms;
 import org.finstack.fluid.eos.SeparableTerms;
 import org.finstack.fluid.eos.TermGroup;
+import org.finstack.fluid.internal.JsonFields;
 
 /**
  * Reads one fluid data file (JSON, Finstack's own format, version 1) from the class path into a
@@ -34,7 +37,6 @@ import org.finstack.fluid.eos.TermGroup;
 final class FluidFile {
 
     private static final int FORMAT = 1;
-    private static final ObjectMapper JSON = new ObjectMapper();
 
     private FluidFile() {
     }
@@ -44,19 +46,7 @@ final class FluidFile {
      * @return the fluid
      */
     static HelmholtzFluid load(String resource) {
-        JsonNode root;
-        try (InputStream in = FluidFile.class.getResourceAsStream(resource)) {
-            if (in == null) {
-                throw new FinstackException(Msg.FILE_UNREADABLE, resource, "not on the class path");
-            }
-            root = JSON.readTree(in);
-        } catch (IOException e) {
-            throw new FinstackException(Msg.FILE_UNREADABLE, resource, e.getMessage());
-        }
-        int format = root.path("format").asInt(-1);
-        if (format != FORMAT) {
-            throw new FinstackException(Msg.NEWER_VERSION, format, FORMAT);
-        }
+        JsonNode root = JsonFields.read(resource, FORMAT);
         String name = text(root, "name");
         List<String> aliases = new ArrayList<>();
         root.path("aliases").forEach(n -> aliases.add(n.asText()));
@@ -120,37 +110,5 @@ final class FluidFile {
         };
         return new Ancillary(form, n.path("tauFactor").asBoolean(), num(n, "reducingTemperature"),
                 num(n, "reducingValue"), arr(n, "n"), arr(n, "t"));
-    }
-
-    private static JsonNode req(JsonNode n, String key) {
-        JsonNode v = n.get(key);
-        if (v == null || v.isNull()) {
-            throw new FinstackException(Msg.MALFORMED_FILE, "missing \"" + key + "\"");
-        }
-        return v;
-    }
-
-    private static String text(JsonNode n, String key) {
-        return req(n, key).asText();
-    }
-
-    private static double num(JsonNode n, String key) {
-        JsonNode v = req(n, key);
-        if (!v.isNumber()) {
-            throw new FinstackException(Msg.MALFORMED_FILE, "\"" + key + "\" is not a number");
-        }
-        return v.asDouble();
-    }
-
-    private static double[] arr(JsonNode n, String key) {
-        JsonNode v = req(n, key);
-        double[] out = new double[v.size()];
-        for (int i = 0; i < out.length; i++) {
-            if (!v.get(i).isNumber()) {
-                throw new FinstackException(Msg.MALFORMED_FILE, "\"" + key + "\" holds a value that is not a number");
-            }
-            out[i] = v.get(i).asDouble();
-        }
-        return out;
     }
 }

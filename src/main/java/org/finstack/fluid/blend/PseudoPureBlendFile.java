@@ -1,9 +1,10 @@
 package org.finstack.fluid.blend;
 
+import static org.finstack.fluid.internal.JsonFields.arr;
+import static org.finstack.fluid.internal.JsonFields.num;
+import static org.finstack.fluid.internal.JsonFields.req;
+
 import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.ObjectMapper;
-import java.io.IOException;
-import java.io.InputStream;
 import java.util.ArrayList;
 import java.util.List;
 import org.finstack.core.FinstackException;
@@ -11,6 +12,7 @@ import org.finstack.core.Msg;
 import org.finstack.fluid.FluidInfo;
 import org.finstack.fluid.HelmholtzFluid;
 import org.finstack.fluid.eos.Ancillary;
+import org.finstack.fluid.internal.JsonFields;
 
 /**
  * Reads the blend section of a pseudo-pure blend's data file (written by
@@ -24,8 +26,6 @@ import org.finstack.fluid.eos.Ancillary;
  */
 public final class PseudoPureBlendFile {
 
-    private static final ObjectMapper JSON = new ObjectMapper();
-
     private PseudoPureBlendFile() {
     }
 
@@ -35,15 +35,7 @@ public final class PseudoPureBlendFile {
      * @return the blend
      */
     public static Lemmon2003PseudoPureBlend load(String resource, HelmholtzFluid eos) {
-        JsonNode root;
-        try (InputStream in = PseudoPureBlendFile.class.getResourceAsStream(resource)) {
-            if (in == null) {
-                throw new FinstackException(Msg.FILE_UNREADABLE, resource, "not on the class path");
-            }
-            root = JSON.readTree(in);
-        } catch (IOException e) {
-            throw new FinstackException(Msg.FILE_UNREADABLE, resource, e.getMessage());
-        }
+        JsonNode root = JsonFields.read(resource);
         JsonNode blend = req(root, "blend");
         List<FluidInfo.Component> comp = new ArrayList<>();
         double sum = 0;
@@ -77,33 +69,5 @@ public final class PseudoPureBlendFile {
         }
         return new SaturationPressureEquation(num(n, "reducingTemperature"), num(n, "reducingValue"),
                 arr(n, "n"), arr(n, "t"));
-    }
-
-    private static JsonNode req(JsonNode n, String key) {
-        JsonNode v = n.get(key);
-        if (v == null || v.isNull()) {
-            throw new FinstackException(Msg.MALFORMED_FILE, "missing \"" + key + "\"");
-        }
-        return v;
-    }
-
-    private static double num(JsonNode n, String key) {
-        JsonNode v = req(n, key);
-        if (!v.isNumber()) {
-            throw new FinstackException(Msg.MALFORMED_FILE, "\"" + key + "\" is not a number");
-        }
-        return v.asDouble();
-    }
-
-    private static double[] arr(JsonNode n, String key) {
-        JsonNode v = req(n, key);
-        double[] out = new double[v.size()];
-        for (int i = 0; i < out.length; i++) {
-            if (!v.get(i).isNumber()) {
-                throw new FinstackException(Msg.MALFORMED_FILE, "\"" + key + "\" holds a value that is not a number");
-            }
-            out[i] = v.get(i).asDouble();
-        }
-        return out;
     }
 }

@@ -4,6 +4,7 @@ import com.fasterxml.jackson.databind.JsonNode;
 import org.finstack.core.Citation;
 import org.finstack.fluid.eos.Derivatives;
 import org.finstack.fluid.eos.HelmholtzEos;
+import org.finstack.fluid.internal.JsonFields;
 
 /**
  * Viscosity from residual-entropy scaling, Bell &amp; Laesecke (2016): the viscosity over the
@@ -49,10 +50,10 @@ final class BellLaesecke2016Viscosity implements ViscosityCorrelation {
             double criticalDensity) {
         this.eos = eos;
         this.molarGasConstant = molarGasConstant;
-        this.c = Data.num(n, "C");
-        this.cl = Data.arr(n, "cLiquid");
-        this.cv = Data.arr(n, "cVapour");
-        this.crossover = Data.num(n, "crossover");
+        this.c = JsonFields.num(n, "C");
+        this.cl = JsonFields.arr(n, "cLiquid");
+        this.cv = JsonFields.arr(n, "cVapour");
+        this.crossover = JsonFields.num(n, "crossover");
         double[] lj = ChapmanEnskog.chungParameters(criticalTemperature, eos.molarMass() / criticalDensity);
         this.sigma = lj[0];
         this.epsilonOverK = lj[1];

@@ -1,9 +1,6 @@
 package org.finstack.fluid.transport;
 
 import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.ObjectMapper;
-import java.io.IOException;
-import java.io.InputStream;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
@@ -19,6 +16,7 @@ import org.finstack.fluid.FluidInfo;
 import org.finstack.fluid.FluidState;
 import org.finstack.fluid.Phase;
 import org.finstack.fluid.TransportProperties;
+import org.finstack.fluid.internal.JsonFields;
 
 /**
  * Transport properties of the pseudo-pure refrigerant blends R410A, R404A, R407C and R507A
@@ -59,7 +57,6 @@ import org.finstack.fluid.TransportProperties;
  */
 public final class BlendTransport implements TransportProperties {
 
-    private static final ObjectMapper JSON = new ObjectMapper();
     private static final int FORMAT = 1;
 
     /**
@@ -113,21 +110,21 @@ public final class BlendTransport implements TransportProperties {
                     + "come from CorrelationTransport");
         }
         JsonNode root = read(blend.name());
-        JsonNode v = Data.req(root, "viscosity");
-        JsonNode c = Data.req(root, "conductivity");
-        JsonNode s = Data.req(root, "surfaceTension");
+        JsonNode v = JsonFields.req(root, "viscosity");
+        JsonNode c = JsonFields.req(root, "conductivity");
+        JsonNode s = JsonFields.req(root, "surfaceTension");
         requireModel(v, "geller2000");
         requireModel(c, "geller2001");
-        var visc = new GellerBivensYokozeki2000Viscosity(Data.arr(v, "a"), Data.arr(v, "b"));
-        var cond = new GellerNemzerCheremnykh2001Conductivity(Data.arr(c, "a"), Data.arr(c, "b"));
-        var sigma = new Okada1999SurfaceTension(Data.num(s, "criticalTemperature"), Data.arr(s, "sigma"),
-                Data.arr(s, "n"));
+        var visc = new GellerBivensYokozeki2000Viscosity(JsonFields.arr(v, "a"), JsonFields.arr(v, "b"));
+        var cond = new GellerNemzerCheremnykh2001Conductivity(JsonFields.arr(c, "a"), JsonFields.arr(c, "b"));
+        var sigma = new Okada1999SurfaceTension(JsonFields.num(s, "criticalTemperature"), JsonFields.arr(s, "sigma"),
+                JsonFields.arr(s, "n"));
         return new BlendTransport(blend.name(), info, visc, cond, sigma,
                 List.of(Data.citation(v), Data.citation(c), Data.citation(s)));
     }
 
     private static void requireModel(JsonNode n, String model) {
-        String m = Data.text(n, "model");
+        String m = JsonFields.text(n, "model");
         if (!model.equals(m)) {
             throw new FinstackException(Msg.MALFORMED_FILE, "blend transport model " + m + ", expected " + model);
         }
@@ -135,20 +132,7 @@ public final class BlendTransport implements TransportProperties {
 
     private static JsonNode read(String blend) {
         String resource = "/org/finstack/fluid/transport/" + blend.toLowerCase(Locale.ROOT) + ".json";
-        JsonNode root;
-        try (InputStream in = BlendTransport.class.getResourceAsStream(resource)) {
-            if (in == null) {
-                throw new FinstackException(Msg.FILE_UNREADABLE, resource, "not on the class path");
-            }
-            root = JSON.readTree(in);
-        } catch (IOException e) {
-            throw new FinstackException(Msg.FILE_UNREADABLE, resource, e.getMessage());
-        }
-        int format = root.path("format").asInt(-1);
-        if (format != FORMAT) {
-            throw new FinstackException(Msg.NEWER_VERSION, format, FORMAT);
-        }
-        return root;
+        return JsonFields.read(resource, FORMAT);
     }
 
     private static String accuracySentence(String name) {

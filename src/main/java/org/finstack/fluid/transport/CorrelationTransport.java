@@ -1,9 +1,6 @@
 package org.finstack.fluid.transport;
 
 import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.ObjectMapper;
-import java.io.IOException;
-import java.io.InputStream;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -19,6 +16,7 @@ import org.finstack.fluid.HelmholtzFluid;
 import org.finstack.fluid.Phase;
 import org.finstack.fluid.TransportProperties;
 import org.finstack.fluid.eos.HelmholtzEos;
+import org.finstack.fluid.internal.JsonFields;
 
 /**
  * Transport properties of one pure refrigerant from its published correlations, evaluated at the
@@ -55,7 +53,6 @@ import org.finstack.fluid.eos.HelmholtzEos;
  */
 public final class CorrelationTransport implements TransportProperties {
 
-    private static final ObjectMapper JSON = new ObjectMapper();
     private static final int FORMAT = 1;
 
     /**
@@ -108,10 +105,10 @@ public final class CorrelationTransport implements TransportProperties {
     public static CorrelationTransport forFluid(HelmholtzFluid fluid) {
         JsonNode root = read(fluid.name());
         List<Citation> sources = new ArrayList<>();
-        ViscosityCorrelation visc = viscosity(fluid, Data.req(root, "viscosity"), sources);
-        JsonNode vn = Data.req(root, "viscosity");
-        ConductivityCorrelation cond = conductivity(fluid, Data.req(root, "conductivity"), vn, visc, sources);
-        JsonNode st = Data.req(root, "surfaceTension");
+        ViscosityCorrelation visc = viscosity(fluid, JsonFields.req(root, "viscosity"), sources);
+        JsonNode vn = JsonFields.req(root, "viscosity");
+        ConductivityCorrelation cond = conductivity(fluid, JsonFields.req(root, "conductivity"), vn, visc, sources);
+        JsonNode st = JsonFields.req(root, "surfaceTension");
         Mulero2012SurfaceTension sigma = Mulero2012SurfaceTension.of(st);
         sources.add(sigma.source());
         return new CorrelationTransport(fluid.name(), fluid.info(), visc, cond, sigma, sources,
@@ -137,20 +134,7 @@ public final class CorrelationTransport implements TransportProperties {
     private static JsonNode read(String fluid) {
         String resource = "/org/finstack/fluid/transport/"
                 + fluid.toLowerCase(Locale.ROOT).replace("(", "").replace(")", "") + ".json";
-        JsonNode root;
-        try (InputStream in = CorrelationTransport.class.getResourceAsStream(resource)) {
-            if (in == null) {
-                throw new FinstackException(Msg.FILE_UNREADABLE, resource, "not on the class path");
-            }
-            root = JSON.readTree(in);
-        } catch (IOException e) {
-            throw new FinstackException(Msg.FILE_UNREADABLE, resource, e.getMessage());
-        }
-        int format = root.path("format").asInt(-1);
-        if (format != FORMAT) {
-            throw new FinstackException(Msg.NEWER_VERSION, format, FORMAT);
-        }
-        return root;
+        return JsonFields.read(resource, FORMAT);
     }
 
     private static double gasConstant(HelmholtzEos eos) {
@@ -161,7 +145,7 @@ public final class CorrelationTransport implements TransportProperties {
         HelmholtzEos eos = fluid.equationOfState();
         FluidInfo info = fluid.info();
         sources.add(Data.citation(n));
-        String model = Data.text(n, "model");
+        String model = JsonFields.text(n, "model");
         return switch (model) {
             case "vogel1998" -> {
                 sources.add(Vogel1998Viscosity.FORM);
@@ -176,7 +160,7 @@ public final class CorrelationTransport implements TransportProperties {
             }
             case "ecs" -> {
                 HelmholtzFluid ref = reference(n);
-                JsonNode refNode = Data.req(read(ref.name()), "viscosity");
+                JsonNode refNode = JsonFields.req(read(ref.name()), "viscosity");
                 ViscosityCorrelation refVisc = viscosity(ref, refNode, new ArrayList<>());
                 sources.add(ChapmanEnskog.SOURCE);
                 yield new ExtendedCorrespondingStates.Viscosity(n, ecs(fluid, ref), refVisc);
@@ -200,25 +184,25 @@ public final class CorrelationTransport implements TransportProperties {
         if (critical != null) {
             sources.add(OlchowySengers1989.SOURCE);
         }
-        String model = Data.text(n, "model");
+        String model = JsonFields.text(n, "model");
         return switch (model) {
             case "polynomial" -> new PolynomialConductivity(n, critical, visc);
             case "ecs" -> {
                 HelmholtzFluid ref = reference(n);
                 JsonNode refRoot = read(ref.name());
-                ViscosityCorrelation refVisc = viscosity(ref, Data.req(refRoot, "viscosity"), new ArrayList<>());
-                ConductivityCorrelation refCond = conductivity(ref, Data.req(refRoot, "conductivity"),
-                        Data.req(refRoot, "viscosity"), refVisc, new ArrayList<>());
+                ViscosityCorrelation refVisc = viscosity(ref, JsonFields.req(refRoot, "viscosity"), new ArrayList<>());
+                ConductivityCorrelation refCond = conductivity(ref, JsonFields.req(refRoot, "conductivity"),
+                        JsonFields.req(refRoot, "viscosity"), refVisc, new ArrayList<>());
                 JsonNode lj = viscNode.has("lennardJones") ? viscNode.get("lennardJones") : viscNode;
                 yield new ExtendedCorrespondingStates.Conductivity(n, ecs(fluid, ref), refCond, visc,
-                        Data.num(lj, "sigma"), Data.num(lj, "epsilonOverK"), critical);
+                        JsonFields.num(lj, "sigma"), JsonFields.num(lj, "epsilonOverK"), critical);
             }
             default -> throw new FinstackException(Msg.MALFORMED_FILE, "unknown conductivity model " + model);
         };
     }
 
     private static HelmholtzFluid reference(JsonNode n) {
-        return (HelmholtzFluid) Fluids.byName(Data.text(n, "referenceFluid"));
+        return (HelmholtzFluid) Fluids.byName(JsonFields.text(n, "referenceFluid"));
     }
 
     private static ExtendedCorrespondingStates ecs(HelmholtzFluid fluid, HelmholtzFluid ref) {

@@ -6,6 +6,7 @@ import org.finstack.core.ConvergenceException;
 import org.finstack.core.Numbers;
 import org.finstack.fluid.eos.Derivatives;
 import org.finstack.fluid.eos.HelmholtzEos;
+import org.finstack.fluid.internal.JsonFields;
 
 /**
  * Extended corresponding states (ECS): the residual viscosity and conductivity of a fluid are
@@ -156,12 +157,12 @@ final class ExtendedCorrespondingStates {
         Viscosity(JsonNode n, ExtendedCorrespondingStates ecs, ViscosityCorrelation refVisc) {
             this.ecs = ecs;
             this.refVisc = refVisc;
-            this.sigma = Data.num(n, "sigma");
-            this.epsilonOverK = Data.num(n, "epsilonOverK");
-            JsonNode p = Data.req(n, "psi");
-            this.pa = Data.arr(p, "a");
-            this.pt = Data.arr(p, "t");
-            this.psiRed = Data.num(p, "reducingMolarDensity");
+            this.sigma = JsonFields.num(n, "sigma");
+            this.epsilonOverK = JsonFields.num(n, "epsilonOverK");
+            JsonNode p = JsonFields.req(n, "psi");
+            this.pa = JsonFields.arr(p, "a");
+            this.pt = JsonFields.arr(p, "t");
+            this.psiRed = JsonFields.num(p, "reducingMolarDensity");
         }
 
         @Override
@@ -215,13 +216,13 @@ final class ExtendedCorrespondingStates {
             this.viscosity = viscosity;
             this.sigma = sigma;
             this.epsilonOverK = epsilonOverK;
-            JsonNode fi = Data.req(n, "fInt");
-            this.fa = Data.arr(fi, "a");
-            this.ft = Data.arr(fi, "t");
-            JsonNode p = Data.req(n, "psi");
-            this.pa = Data.arr(p, "a");
-            this.pt = Data.arr(p, "t");
-            this.psiRed = Data.num(p, "reducingMolarDensity");
+            JsonNode fi = JsonFields.req(n, "fInt");
+            this.fa = JsonFields.arr(fi, "a");
+            this.ft = JsonFields.arr(fi, "t");
+            JsonNode p = JsonFields.req(n, "psi");
+            this.pa = JsonFields.arr(p, "a");
+            this.pt = JsonFields.arr(p, "t");
+            this.psiRed = JsonFields.num(p, "reducingMolarDensity");
             this.critical = critical;
         }
 

@@ -4,6 +4,7 @@ import com.fasterxml.jackson.databind.JsonNode;
 import org.finstack.core.Citation;
 import org.finstack.core.Limit;
 import org.finstack.core.Validity;
+import org.finstack.fluid.internal.JsonFields;
 
 /**
  * Viscosity of carbon dioxide (R744), reference correlation of Laesecke &amp; Muzny (2017):
@@ -55,11 +56,11 @@ final class LaeseckeMuzny2017Viscosity implements ViscosityCorrelation {
      *          the initial-density term)
      */
     LaeseckeMuzny2017Viscosity(JsonNode n) {
-        this.sigma = Data.num(n, "sigma");
-        this.epsilonOverK = Data.num(n, "epsilonOverK");
-        JsonNode id = Data.req(n, "initialDensity");
-        this.b = Data.arr(id, "b");
-        this.bt = Data.arr(id, "t");
+        this.sigma = JsonFields.num(n, "sigma");
+        this.epsilonOverK = JsonFields.num(n, "epsilonOverK");
+        JsonNode id = JsonFields.req(n, "initialDensity");
+        this.b = JsonFields.arr(id, "b");
+        this.bt = JsonFields.arr(id, "t");
     }
 
     @Override

@@ -2,6 +2,7 @@ package org.finstack.fluid.transport;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import org.finstack.core.Citation;
+import org.finstack.fluid.internal.JsonFields;
 
 /**
  * Surface tension of a pure fluid along the saturation line, the correlations of Mulero,
@@ -41,8 +42,8 @@ public final class Mulero2012SurfaceTension {
     }
 
     static Mulero2012SurfaceTension of(JsonNode node) {
-        return new Mulero2012SurfaceTension(Data.num(node, "criticalTemperature"), Data.arr(node, "sigma"),
-                Data.arr(node, "n"), Data.citation(node));
+        return new Mulero2012SurfaceTension(JsonFields.num(node, "criticalTemperature"), JsonFields.arr(node, "sigma"),
+                JsonFields.arr(node, "n"), Data.citation(node));
     }
 
     /** @return the paper the coefficients come from */

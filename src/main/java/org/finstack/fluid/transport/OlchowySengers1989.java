@@ -4,6 +4,7 @@ import com.fasterxml.jackson.databind.JsonNode;
 import org.finstack.core.Citation;
 import org.finstack.fluid.eos.HelmholtzEos;
 import org.finstack.fluid.eos.HelmholtzEos.Properties;
+import org.finstack.fluid.internal.JsonFields;
 
 /**
  * Critical enhancement of the thermal conductivity, simplified crossover model of Olchowy &amp;
@@ -46,13 +47,13 @@ final class OlchowySengers1989 {
         this.tc = tc;
         this.pc = pc;
         this.rhoc = rhoc;
-        this.qd = Data.num(n, "qD");
-        this.xi0 = Data.num(n, "xi0");
-        this.bigGamma = Data.num(n, "Gamma");
-        this.r0 = Data.num(n, "R0");
-        this.gamma = Data.num(n, "gamma");
-        this.nu = Data.num(n, "nu");
-        this.tRef = n.has("referenceTemperature") ? Data.num(n, "referenceTemperature") : 1.5 * tc;
+        this.qd = JsonFields.num(n, "qD");
+        this.xi0 = JsonFields.num(n, "xi0");
+        this.bigGamma = JsonFields.num(n, "Gamma");
+        this.r0 = JsonFields.num(n, "R0");
+        this.gamma = JsonFields.num(n, "gamma");
+        this.nu = JsonFields.num(n, "nu");
+        this.tRef = n.has("referenceTemperature") ? JsonFields.num(n, "referenceTemperature") : 1.5 * tc;
     }
 
     /**

@@ -2,6 +2,7 @@ package org.finstack.fluid.transport;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import org.finstack.core.Citation;
+import org.finstack.fluid.internal.JsonFields;
 
 /**
  * Thermal conductivity as dilute-gas part, residual polynomial and critical enhancement, the form
@@ -51,19 +52,19 @@ final class PolynomialConductivity implements ConductivityCorrelation {
      * @param viscosity the fluid's viscosity (for the critical enhancement)
      */
     PolynomialConductivity(JsonNode n, OlchowySengers1989 critical, ViscosityCorrelation viscosity) {
-        JsonNode d = Data.req(n, "dilute");
-        this.co2 = "huber2016co2".equals(Data.text(d, "type"));
-        this.tDil = co2 ? CO2_TC : Data.num(d, "reducingTemperature");
-        this.da = co2 ? CO2_L : Data.arr(d, "A");
-        this.dn = co2 ? new double[0] : Data.arr(d, "n");
-        this.db = co2 ? new double[0] : Data.arr(d, "B");
-        this.dm = co2 ? new double[0] : Data.arr(d, "m");
-        JsonNode r = Data.req(n, "residual");
-        this.tRes = Data.num(r, "reducingTemperature");
-        this.rhoRes = Data.num(r, "reducingDensity");
-        this.rb = Data.arr(r, "B");
-        this.rd = Data.arr(r, "d");
-        this.rt = Data.arr(r, "t");
+        JsonNode d = JsonFields.req(n, "dilute");
+        this.co2 = "huber2016co2".equals(JsonFields.text(d, "type"));
+        this.tDil = co2 ? CO2_TC : JsonFields.num(d, "reducingTemperature");
+        this.da = co2 ? CO2_L : JsonFields.arr(d, "A");
+        this.dn = co2 ? new double[0] : JsonFields.arr(d, "n");
+        this.db = co2 ? new double[0] : JsonFields.arr(d, "B");
+        this.dm = co2 ? new double[0] : JsonFields.arr(d, "m");
+        JsonNode r = JsonFields.req(n, "residual");
+        this.tRes = JsonFields.num(r, "reducingTemperature");
+        this.rhoRes = JsonFields.num(r, "reducingDensity");
+        this.rb = JsonFields.arr(r, "B");
+        this.rd = JsonFields.arr(r, "d");
+        this.rt = JsonFields.arr(r, "t");
         this.critical = critical;
         this.viscosity = viscosity;
     }

@@ -2,6 +2,7 @@ package org.finstack.fluid.transport;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import org.finstack.core.Citation;
+import org.finstack.fluid.internal.JsonFields;
 
 /**
  * The residual-viscosity form of Vogel, Kuechenmeister, Bich &amp; Laesecke (1998), used with
@@ -58,32 +59,32 @@ final class Vogel1998Viscosity implements ViscosityCorrelation {
 
     Vogel1998Viscosity(JsonNode n, double molarMass) {
         this.molarMass = molarMass;
-        this.sigma = Data.num(n, "sigma");
-        this.epsilonOverK = Data.num(n, "epsilonOverK");
-        JsonNode dil = Data.req(n, "dilute");
-        this.neufeld = "neufeld".equals(Data.text(dil, "type"));
-        this.c = neufeld ? 0 : Data.num(dil, "C");
-        this.ca = neufeld ? new double[0] : Data.arr(dil, "a");
-        this.ct = neufeld ? new double[0] : Data.arr(dil, "t");
-        this.ciMolarMass = neufeld ? molarMass : Data.num(dil, "molarMass");
-        JsonNode id = Data.req(n, "initialDensity");
-        this.b = Data.arr(id, "b");
-        this.bt = Data.arr(id, "t");
-        JsonNode ho = Data.req(n, "higherOrder");
-        this.tRed = Data.num(ho, "reducingTemperature");
-        this.rhoRed = Data.num(ho, "reducingMolarDensity");
-        this.a = Data.arr(ho, "a");
-        this.d1 = Data.arr(ho, "d1");
-        this.t1 = Data.arr(ho, "t1");
-        this.gamma = Data.arr(ho, "gamma");
-        this.l = Data.arr(ho, "l");
-        this.f = Data.arr(ho, "f");
-        this.d2 = Data.arr(ho, "d2");
-        this.t2 = Data.arr(ho, "t2");
-        this.g = Data.arr(ho, "g");
-        this.h = Data.arr(ho, "h");
-        this.p = Data.arr(ho, "p");
-        this.q = Data.arr(ho, "q");
+        this.sigma = JsonFields.num(n, "sigma");
+        this.epsilonOverK = JsonFields.num(n, "epsilonOverK");
+        JsonNode dil = JsonFields.req(n, "dilute");
+        this.neufeld = "neufeld".equals(JsonFields.text(dil, "type"));
+        this.c = neufeld ? 0 : JsonFields.num(dil, "C");
+        this.ca = neufeld ? new double[0] : JsonFields.arr(dil, "a");
+        this.ct = neufeld ? new double[0] : JsonFields.arr(dil, "t");
+        this.ciMolarMass = neufeld ? molarMass : JsonFields.num(dil, "molarMass");
+        JsonNode id = JsonFields.req(n, "initialDensity");
+        this.b = JsonFields.arr(id, "b");
+        this.bt = JsonFields.arr(id, "t");
+        JsonNode ho = JsonFields.req(n, "higherOrder");
+        this.tRed = JsonFields.num(ho, "reducingTemperature");
+        this.rhoRed = JsonFields.num(ho, "reducingMolarDensity");
+        this.a = JsonFields.arr(ho, "a");
+        this.d1 = JsonFields.arr(ho, "d1");
+        this.t1 = JsonFields.arr(ho, "t1");
+        this.gamma = JsonFields.arr(ho, "gamma");
+        this.l = JsonFields.arr(ho, "l");
+        this.f = JsonFields.arr(ho, "f");
+        this.d2 = JsonFields.arr(ho, "d2");
+        this.t2 = JsonFields.arr(ho, "t2");
+        this.g = JsonFields.arr(ho, "g");
+        this.h = JsonFields.arr(ho, "h");
+        this.p = JsonFields.arr(ho, "p");
+        this.q = JsonFields.arr(ho, "q");
     }
 
     @Override
