@@ -1,10 +1,12 @@
 package org.finstack.fluid.transport;
 
+import static org.finstack.fluid.transport.TransportLimits.pct;
+import static org.finstack.fluid.transport.TransportLimits.statedAccuracy;
+
 import com.fasterxml.jackson.databind.JsonNode;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
-import org.finstack.core.Check;
 import org.finstack.core.Citation;
 import org.finstack.core.FinstackException;
 import org.finstack.core.InputException;
@@ -14,7 +16,6 @@ import org.finstack.core.OutOfRangeException;
 import org.finstack.fluid.Fluid;
 import org.finstack.fluid.FluidInfo;
 import org.finstack.fluid.FluidState;
-import org.finstack.fluid.Phase;
 import org.finstack.fluid.TransportProperties;
 import org.finstack.fluid.internal.JsonFields;
 
@@ -71,9 +72,7 @@ public final class BlendTransport implements TransportProperties {
             "R507A", new double[] {1e-8, 1e-8, 1e-8, 1e-8, 1e-10});
 
     private final String name;
-    private final double tMin;
-    private final double tMax;
-    private final double tc;
+    private final TransportLimits limits;
     private final GellerBivensYokozeki2000Viscosity viscosity;
     private final GellerNemzerCheremnykh2001Conductivity conductivity;
     private final Okada1999SurfaceTension surfaceTension;
@@ -84,9 +83,10 @@ public final class BlendTransport implements TransportProperties {
             GellerNemzerCheremnykh2001Conductivity conductivity, Okada1999SurfaceTension surfaceTension,
             List<Citation> sources) {
         this.name = name;
-        this.tMin = info.minTemperature();
-        this.tMax = info.maxTemperature();
-        this.tc = info.criticalTemperature();
+        this.limits = new TransportLimits(name, info, "viscosity and conductivity are not defined for a "
+                        + "two-phase state of " + name + "; take them from the saturated liquid (bubble point) and "
+                        + "saturated vapour (dew point)",
+                "bubble-point temperature [K]");
         this.viscosity = viscosity;
         this.conductivity = conductivity;
         this.surfaceTension = surfaceTension;
@@ -136,10 +136,7 @@ public final class BlendTransport implements TransportProperties {
     }
 
     private static String accuracySentence(String name) {
-        double[] a = ACCURACY.get(name);
-        if (a == null) {
-            throw new FinstackException(Msg.IMPOSSIBLE, "no stated accuracy for " + name);
-        }
+        double[] a = statedAccuracy(ACCURACY, name);
         return String.format(Locale.ROOT, "%s, against CoolProp 8.0.0 at the bubble-point liquid and dew-point "
                 + "vapour from -50 to +60 degC and at single-phase states: viscosity liquid within %s %%, vapour "
                 + "within %s %%; thermal conductivity liquid within %s %%, vapour within %s %%; surface tension "
@@ -149,30 +146,22 @@ public final class BlendTransport implements TransportProperties {
                 + "phases inside the glide.", name, pct(a[0]), pct(a[1]), pct(a[2]), pct(a[3]), pct(a[4]));
     }
 
-    private static String pct(double v) {
-        return java.math.BigDecimal.valueOf(v * 100).stripTrailingZeros().toPlainString();
-    }
-
     @Override
     public double viscosity(FluidState state) {
-        check(state);
+        limits.checkState(state);
         return positive("viscosity [Pa s]", viscosity.at(state.temperature(), state.density()), state);
     }
 
     @Override
     public double conductivity(FluidState state) {
-        check(state);
+        limits.checkState(state);
         return positive("thermal conductivity [W/(m K)]", conductivity.at(state.temperature(), state.density()),
                 state);
     }
 
     @Override
     public double surfaceTension(double temperature) {
-        Check.finite("temperature", temperature);
-        if (temperature < tMin || temperature > tc) {
-            throw new OutOfRangeException(Msg.FLUID_OUT_OF_RANGE, name, "bubble-point temperature [K]", temperature,
-                    plain(tMin) + " K to " + plain(tc) + " K");
-        }
+        limits.checkSurfaceTensionTemperature(temperature);
         return surfaceTension.at(temperature);
     }
 
@@ -186,22 +175,6 @@ public final class BlendTransport implements TransportProperties {
         return accuracy;
     }
 
-    private void check(FluidState state) {
-        if (state == null) {
-            throw new InputException("state", Msg.MISSING);
-        }
-        if (state.phase() == Phase.TWO_PHASE) {
-            throw new FinstackException(Msg.IMPOSSIBLE, "viscosity and conductivity are not defined for a "
-                    + "two-phase state of " + name + "; take them from the saturated liquid (bubble point) and "
-                    + "saturated vapour (dew point)");
-        }
-        double t = state.temperature();
-        if (t < tMin || t > tMax) {
-            throw new OutOfRangeException(Msg.FLUID_OUT_OF_RANGE, name, "T [K]", t,
-                    plain(tMin) + " K to " + plain(tMax) + " K");
-        }
-    }
-
     private double positive(String property, double value, FluidState state) {
         if (!(value > 0) || !Double.isFinite(value)) {
             throw new OutOfRangeException(Msg.FLUID_OUT_OF_RANGE, name, "density [kg/m3] at T = "
@@ -209,10 +182,6 @@ public final class BlendTransport implements TransportProperties {
                     "where the blend correlation gives a positive " + property);
         }
         return value;
-    }
-
-    private static String plain(double v) {
-        return java.math.BigDecimal.valueOf(v).stripTrailingZeros().toPlainString();
     }
 
     @Override

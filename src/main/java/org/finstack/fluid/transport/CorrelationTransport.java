@@ -1,5 +1,8 @@
 package org.finstack.fluid.transport;
 
+import static org.finstack.fluid.transport.TransportLimits.pct;
+import static org.finstack.fluid.transport.TransportLimits.statedAccuracy;
+
 import com.fasterxml.jackson.databind.JsonNode;
 import java.util.ArrayList;
 import java.util.List;
@@ -13,7 +16,6 @@ import org.finstack.fluid.FluidInfo;
 import org.finstack.fluid.FluidState;
 import org.finstack.fluid.Fluids;
 import org.finstack.fluid.HelmholtzFluid;
-import org.finstack.fluid.Phase;
 import org.finstack.fluid.TransportProperties;
 import org.finstack.fluid.eos.HelmholtzEos;
 import org.finstack.fluid.internal.JsonFields;
@@ -74,9 +76,7 @@ public final class CorrelationTransport implements TransportProperties {
             Map.entry("R744", new double[] {1e-4, 1e-4, 1e-3, 1e-3}));
 
     private final String name;
-    private final double tMin;
-    private final double tMax;
-    private final double tc;
+    private final TransportLimits limits;
     private final ViscosityCorrelation viscosity;
     private final ConductivityCorrelation conductivity;
     private final Mulero2012SurfaceTension surfaceTension;
@@ -87,9 +87,9 @@ public final class CorrelationTransport implements TransportProperties {
             ConductivityCorrelation conductivity, Mulero2012SurfaceTension surfaceTension, List<Citation> sources,
             String accuracy) {
         this.name = name;
-        this.tMin = info.minTemperature();
-        this.tMax = info.maxTemperature();
-        this.tc = info.criticalTemperature();
+        this.limits = new TransportLimits(name, info, "viscosity and conductivity are not defined for a "
+                        + "two-phase state; take them from the saturated liquid and vapour",
+                "saturation temperature [K]");
         this.viscosity = viscosity;
         this.conductivity = conductivity;
         this.surfaceTension = surfaceTension;
@@ -116,19 +116,12 @@ public final class CorrelationTransport implements TransportProperties {
     }
 
     private static String accuracySentence(String name) {
-        double[] a = ACCURACY.get(name);
-        if (a == null) {
-            throw new FinstackException(Msg.IMPOSSIBLE, "no stated accuracy for " + name);
-        }
+        double[] a = statedAccuracy(ACCURACY, name);
         return String.format(Locale.ROOT, "%s, against CoolProp 8.0.0 at saturated liquid and vapour from -50 to "
                 + "+60 degC and at single-phase states: viscosity liquid within %s %%, vapour within %s %%; "
                 + "thermal conductivity liquid within %s %%, vapour within %s %%; surface tension within "
                 + "0.01 %%. Against measurements: the uncertainty stated by each correlation's paper "
                 + "(typically 2-5 %%).", name, pct(a[0]), pct(a[1]), pct(a[2]), pct(a[3]));
-    }
-
-    private static String pct(double v) {
-        return java.math.BigDecimal.valueOf(v * 100).stripTrailingZeros().toPlainString();
     }
 
     private static JsonNode read(String fluid) {
@@ -214,23 +207,19 @@ public final class CorrelationTransport implements TransportProperties {
 
     @Override
     public double viscosity(FluidState state) {
-        check(state);
+        limits.checkState(state);
         return viscosity.viscosity(state.temperature(), state.density());
     }
 
     @Override
     public double conductivity(FluidState state) {
-        check(state);
+        limits.checkState(state);
         return conductivity.conductivity(state.temperature(), state.density());
     }
 
     @Override
     public double surfaceTension(double temperature) {
-        org.finstack.core.Check.finite("temperature", temperature);
-        if (temperature < tMin || temperature > tc) {
-            throw new OutOfRangeException(Msg.FLUID_OUT_OF_RANGE, name, "saturation temperature [K]", temperature,
-                    plain(tMin) + " K to " + plain(tc) + " K");
-        }
+        limits.checkSurfaceTensionTemperature(temperature);
         return surfaceTension.at(temperature);
     }
 
@@ -242,25 +231,6 @@ public final class CorrelationTransport implements TransportProperties {
     @Override
     public String accuracy() {
         return accuracy;
-    }
-
-    private void check(FluidState state) {
-        if (state == null) {
-            throw new org.finstack.core.InputException("state", Msg.MISSING);
-        }
-        if (state.phase() == Phase.TWO_PHASE) {
-            throw new FinstackException(Msg.IMPOSSIBLE, "viscosity and conductivity are not defined for a "
-                    + "two-phase state; take them from the saturated liquid and vapour");
-        }
-        double t = state.temperature();
-        if (t < tMin || t > tMax) {
-            throw new OutOfRangeException(Msg.FLUID_OUT_OF_RANGE, name, "T [K]", t,
-                    plain(tMin) + " K to " + plain(tMax) + " K");
-        }
-    }
-
-    private static String plain(double v) {
-        return java.math.BigDecimal.valueOf(v).stripTrailingZeros().toPlainString();
     }
 
     @Override
