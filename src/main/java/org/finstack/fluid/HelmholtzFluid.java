@@ -3,14 +3,13 @@ package org.finstack.fluid;
 import org.finstack.core.Check;
 import org.finstack.core.Citation;
 import org.finstack.core.ConvergenceException;
-import org.finstack.core.InputException;
-import org.finstack.core.Msg;
 import org.finstack.core.Numbers;
 import org.finstack.core.OutOfRangeException;
 import org.finstack.fluid.eos.Ancillary;
 import org.finstack.fluid.eos.Derivatives;
 import org.finstack.fluid.eos.HelmholtzEos;
 import org.finstack.fluid.eos.HelmholtzEos.Properties;
+import org.finstack.fluid.internal.HelmholtzBackEnd;
 
 /**
  * A pure fluid computed from its reference Helmholtz-energy equation of state
@@ -47,7 +46,7 @@ import org.finstack.fluid.eos.HelmholtzEos.Properties;
  * 292 803 Pa, saturated liquid density 1294.78 kg/m3, saturated vapour density 14.428 kg/m3 and
  * latent heat 198 603 J/kg.
  */
-public final class HelmholtzFluid implements Fluid {
+public final class HelmholtzFluid extends HelmholtzBackEnd {
 
     /** The phase-equilibrium method. */
     public static final Citation SATURATION_METHOD = Citation.of("Akasaka 2008",
@@ -61,11 +60,9 @@ public final class HelmholtzFluid implements Fluid {
     /** IIR reference entropy [J/(kg K)] (IIR convention, common practice). */
     static final double IIR_ENTROPY = 1_000;
 
-    private static final int MAX_ITER = 100;
     /** Relative distance below Tc from which saturation starts from scaled values, not ancillaries. */
     private static final double NEAR_CRITICAL = 0.01;
 
-    private final String name;
     private final HelmholtzEos eos;
     private final Ancillary vapourPressure;
     private final Ancillary liquidDensity;
@@ -73,14 +70,9 @@ public final class HelmholtzFluid implements Fluid {
     private final double tc;
     private final double pc;
     private final double rhoc;
-    private final double tMin;
-    private final double tMax;
-    private final double pMax;
     private final double pMin;
     private final double rhoMax;
     private final FluidInfo info;
-    /** Transport properties, built on first use (benign race: every build gives an equal object). */
-    private volatile TransportProperties transport;
 
     /**
      * @param info           constants (the triple pressure is recomputed from the equation)
@@ -92,16 +84,13 @@ public final class HelmholtzFluid implements Fluid {
      */
     HelmholtzFluid(FluidInfo info, HelmholtzEos eos, Ancillary vapourPressure, Ancillary liquidDensity,
             Ancillary vapourDensity) {
-        this.name = info.name();
+        super(info.name(), info.minTemperature(), info.maxTemperature(), info.maxPressure());
         this.vapourPressure = vapourPressure;
         this.liquidDensity = liquidDensity;
         this.vapourDensity = vapourDensity;
         this.tc = info.criticalTemperature();
         this.pc = info.criticalPressure();
         this.rhoc = info.criticalDensity();
-        this.tMin = info.minTemperature();
-        this.tMax = info.maxTemperature();
-        this.pMax = info.maxPressure();
         // IIR reference state: shift a1 and a2 so that h' = 200 kJ/kg, s' = 1 kJ/(kg K) at 0 degC
         double[] raw = saturationDensities(eos, IIR_TEMPERATURE, null);
         Properties ref = eos.properties(IIR_TEMPERATURE, raw[0]);
@@ -115,11 +104,6 @@ public final class HelmholtzFluid implements Fluid {
         this.info = new FluidInfo(info.name(), info.aliases(), info.chemicalName(), info.safetyClass(),
                 info.gwp100(), info.gwpBasis(), tc, pc, rhoc, info.molarMass(), info.tripleTemperature(),
                 pMin, tMin, tMax, pMax, info.equationOfState(), info.referenceState());
-    }
-
-    @Override
-    public String name() {
-        return name;
     }
 
     @Override
@@ -153,11 +137,7 @@ public final class HelmholtzFluid implements Fluid {
 
     @Override
     public SaturationState saturationAtTemperature(double temperature) {
-        Check.finite("temperature", temperature);
-        if (temperature < tMin || temperature >= tc) {
-            throw outOfRange("saturation temperature [K]", temperature,
-                    plain(tMin) + " K to below " + plain(tc) + " K");
-        }
+        requireSaturationTemperature(temperature, tc);
         double[] d = saturationDensities(eos, temperature, null);
         return saturation(temperature, d);
     }
@@ -202,37 +182,18 @@ public final class HelmholtzFluid implements Fluid {
             }
             t = tn;
         }
-        throw new ConvergenceException(name + " saturation temperature at p = " + Numbers.brief(pressure) + " Pa",
+        throw new ConvergenceException(name() + " saturation temperature at p = " + Numbers.brief(pressure) + " Pa",
                 MAX_ITER, f);
     }
 
     @Override
-    public FluidState at(InputPair pair, double a, double b) {
-        if (pair == null) {
-            throw new InputException("inputPair", Msg.MISSING);
-        }
-        return switch (pair) {
-            case TP -> atTP(a, b);
-            case PH -> atPH(a, b);
-            case PQ -> {
-                Check.finite("pressure", a);
-                Check.within("quality", b, 0, 1);
-                yield mix(saturationAtPressure(a), b);
-            }
-            case TQ -> {
-                Check.finite("temperature", a);
-                Check.within("quality", b, 0, 1);
-                yield mix(saturationAtTemperature(a), b);
-            }
-        };
+    protected FluidState atTP(double temperature, double pressure) {
+        return singleTP(temperature, pressure, null);
     }
 
-    private FluidState atTP(double temperature, double pressure) {
-        Check.finite("temperature", temperature);
-        Check.finite("pressure", pressure);
-        requireTemperature(temperature);
-        requirePressure(pressure);
-        return singleTP(temperature, pressure, null);
+    @Override
+    protected FluidState atTQ(double temperature, double quality) {
+        return mix(saturationAtTemperature(temperature), quality);
     }
 
     /** Single-phase state at (T, p); {@code sat} is the saturation densities at T if known. */
@@ -241,43 +202,33 @@ public final class HelmholtzFluid implements Fluid {
         Phase phase;
         if (temperature >= tc) {
             double guess = Math.min(pressure / (eos.specificGasConstant() * temperature), 2 * rhoc);
-            rho = solveDensity(temperature, pressure, 0, Double.POSITIVE_INFINITY, guess);
+            rho = densityInPhase(temperature, pressure, 0, Double.POSITIVE_INFINITY, guess);
             phase = pressure >= pc ? Phase.SUPERCRITICAL : Phase.VAPOUR;
         } else {
             double[] d = saturationDensities(eos, temperature, satStart);
             double ps = eos.pressure(temperature, d[1]);
             if (pressure >= ps) {
-                rho = solveDensity(temperature, pressure, d[0], Double.POSITIVE_INFINITY, d[0]);
+                rho = densityInPhase(temperature, pressure, d[0], Double.POSITIVE_INFINITY, d[0]);
                 phase = Phase.LIQUID;
             } else {
                 double guess = Math.min(pressure / (eos.specificGasConstant() * temperature), d[1]);
-                rho = solveDensity(temperature, pressure, 0, d[1], guess);
+                rho = densityInPhase(temperature, pressure, 0, d[1], guess);
                 phase = Phase.VAPOUR;
             }
         }
         return single(eos.properties(temperature, rho), phase, FluidState.NO_QUALITY);
     }
 
-    private FluidState atPH(double pressure, double enthalpy) {
-        Check.finite("pressure", pressure);
-        Check.finite("enthalpy", enthalpy);
-        requirePressure(pressure);
+    @Override
+    protected FluidState atPH(double pressure, double enthalpy) {
         if (pressure >= pMin && pressure < pc) {
             SaturationState sat = saturationAtPressure(pressure);
-            double hl = sat.liquid().enthalpy();
-            double hv = sat.vapour().enthalpy();
-            double edge = 1e-9 * (hv - hl);
-            if (Math.abs(enthalpy - hl) <= edge) {
-                return sat.liquid();
-            }
-            if (Math.abs(enthalpy - hv) <= edge) {
-                return sat.vapour();
-            }
-            if (enthalpy > hl && enthalpy < hv) {
-                return mix(sat, (enthalpy - hl) / (hv - hl));
+            FluidState twoPhase = inSaturation(sat, enthalpy);
+            if (twoPhase != null) {
+                return twoPhase;
             }
             double ts = sat.liquid().temperature();
-            if (enthalpy < hl) {
+            if (enthalpy < sat.liquid().enthalpy()) {
                 return temperatureFromEnthalpy(pressure, enthalpy, tMin, ts, null, sat.liquid());
             }
             return temperatureFromEnthalpy(pressure, enthalpy, ts, tMax, sat.vapour(), null);
@@ -337,7 +288,7 @@ public final class HelmholtzFluid implements Fluid {
             }
             t = tn;
         }
-        throw new ConvergenceException(name + " temperature at p = " + Numbers.brief(p) + " Pa, h = "
+        throw new ConvergenceException(name() + " temperature at p = " + Numbers.brief(p) + " Pa, h = "
                 + Numbers.brief(h) + " J/kg", MAX_ITER, f);
     }
 
@@ -345,7 +296,7 @@ public final class HelmholtzFluid implements Fluid {
      * Newton iteration with bisection fallback for p(T, rho) = p with rho in (lo, hi); hi may be
      * infinite (then it is found by expansion up to 1.5 times the triple-point liquid density).
      */
-    private double solveDensity(double temperature, double pressure, double lo, double hi, double guess) {
+    private double densityInPhase(double temperature, double pressure, double lo, double hi, double guess) {
         if (Double.isInfinite(hi)) {
             double top = Math.max(guess, Math.max(lo, rhoc)) * 1.05;
             while (eos.pressure(temperature, top) < pressure) {
@@ -359,29 +310,7 @@ public final class HelmholtzFluid implements Fluid {
             hi = top;
         }
         double x = guess > lo && guess < hi ? guess : 0.5 * (lo + hi);
-        double f = Double.NaN;
-        for (int it = 0; it < MAX_ITER; it++) {
-            double[] ps = eos.pressureAndSlope(temperature, x);
-            f = ps[0] - pressure;
-            if (f == 0) {
-                return x;
-            }
-            if (f > 0) {
-                hi = x;
-            } else {
-                lo = x;
-            }
-            double xn = x - f / ps[1];
-            if (ps[1] > 0 && (Math.abs(xn - x) <= 1e-13 * x || Math.abs(f) <= 1e-13 * pressure)) {
-                return xn;
-            }
-            if (!(ps[1] > 0) || !(xn > lo && xn < hi)) {
-                xn = 0.5 * (lo + hi);
-            }
-            x = xn;
-        }
-        throw new ConvergenceException(name + " density at T = " + Numbers.brief(temperature) + " K, p = "
-                + Numbers.brief(pressure) + " Pa", MAX_ITER, f / pressure);
+        return solveDensity(eos, temperature, pressure, lo, hi, x);
     }
 
     /**
@@ -461,13 +390,13 @@ public final class HelmholtzFluid implements Fluid {
             dl = ndl;
             dv = ndv;
         }
-        throw new ConvergenceException(name + " saturation at T = " + Numbers.brief(t) + " K", MAX_ITER, err);
+        throw new ConvergenceException(name() + " saturation at T = " + Numbers.brief(t) + " K", MAX_ITER, err);
     }
 
     /** Rejects the trivial solution (both densities equal) that Newton can fall into near Tc. */
     private double[] accepted(double t, double rhoL, double rhoV, double err) {
         if (!(rhoL > rhoc && rhoV < rhoc)) {
-            throw new ConvergenceException(name + " saturation at T = " + Numbers.brief(t)
+            throw new ConvergenceException(name() + " saturation at T = " + Numbers.brief(t)
                     + " K (converged to equal densities)", MAX_ITER, err);
         }
         return new double[] {rhoL, rhoV};
@@ -499,45 +428,9 @@ public final class HelmholtzFluid implements Fluid {
         return new SaturationState(liquid, vapour);
     }
 
-    private static FluidState mix(SaturationState sat, double q) {
-        if (q == 0) {
-            return sat.liquid();
-        }
-        if (q == 1) {
-            return sat.vapour();
-        }
-        FluidState l = sat.liquid();
-        FluidState v = sat.vapour();
-        double vol = (1 - q) / l.density() + q / v.density();
-        return new FluidState(l.temperature(), v.pressure(), 1 / vol,
-                l.enthalpy() + q * (v.enthalpy() - l.enthalpy()), l.entropy() + q * (v.entropy() - l.entropy()),
-                0, 0, 0, Phase.TWO_PHASE, q);
-    }
-
     private static FluidState single(Properties p, Phase phase, double quality) {
         return new FluidState(p.temperature(), p.pressure(), p.density(), p.enthalpy(), p.entropy(), p.cp(),
                 p.cv(), p.speedOfSound(), phase, quality);
-    }
-
-    private void requireTemperature(double t) {
-        if (t < tMin || t > tMax) {
-            throw outOfRange("T [K]", t, plain(tMin) + " K to " + plain(tMax) + " K");
-        }
-    }
-
-    private void requirePressure(double p) {
-        if (!(p > 0) || p > pMax) {
-            throw outOfRange("p [Pa]", p, "above 0 Pa up to " + plain(pMax) + " Pa");
-        }
-    }
-
-    /** A range bound as stated, without rounding (e.g. 169.85, not 169.9). */
-    private static String plain(double v) {
-        return java.math.BigDecimal.valueOf(v).stripTrailingZeros().toPlainString();
-    }
-
-    private OutOfRangeException outOfRange(String property, double value, String range) {
-        return new OutOfRangeException(Msg.FLUID_OUT_OF_RANGE, name, property, value, range);
     }
 
     /**
@@ -545,17 +438,12 @@ public final class HelmholtzFluid implements Fluid {
      *         ({@link org.finstack.fluid.transport.CorrelationTransport})
      */
     @Override
-    public TransportProperties transport() {
-        TransportProperties t = transport;
-        if (t == null) {
-            t = org.finstack.fluid.transport.CorrelationTransport.forFluid(this);
-            transport = t;
-        }
-        return t;
+    protected TransportProperties buildTransport() {
+        return org.finstack.fluid.transport.CorrelationTransport.forFluid(this);
     }
 
     @Override
     public String toString() {
-        return name + " (" + info.equationOfState().key() + ")";
+        return name() + " (" + info.equationOfState().key() + ")";
     }
 }

@@ -3,13 +3,10 @@ package org.finstack.fluid.blend;
 import org.finstack.core.Check;
 import org.finstack.core.Citation;
 import org.finstack.core.ConvergenceException;
-import org.finstack.core.InputException;
 import org.finstack.core.Limit;
-import org.finstack.core.Msg;
 import org.finstack.core.Numbers;
 import org.finstack.core.OutOfRangeException;
 import org.finstack.core.Validity;
-import org.finstack.fluid.Fluid;
 import org.finstack.fluid.FluidInfo;
 import org.finstack.fluid.FluidState;
 import org.finstack.fluid.HelmholtzFluid;
@@ -19,6 +16,7 @@ import org.finstack.fluid.SaturationState;
 import org.finstack.fluid.TransportProperties;
 import org.finstack.fluid.eos.Ancillary;
 import org.finstack.fluid.eos.HelmholtzEos;
+import org.finstack.fluid.internal.HelmholtzBackEnd;
 
 /**
  * A refrigerant blend treated as a pseudo-pure fluid after Lemmon (2003): one Helmholtz-energy
@@ -70,7 +68,7 @@ import org.finstack.fluid.eos.HelmholtzEos;
  * pressure, {@code saturationAtPressure(460724)} gives a bubble temperature of 266.88 K, a glide
  * of 6.27 K (dew point 0 degC).
  */
-public final class Lemmon2003PseudoPureBlend implements Fluid {
+public final class Lemmon2003PseudoPureBlend extends HelmholtzBackEnd {
 
     /** The equations of state and the bubble/dew pressure equations. */
     public static final Citation SOURCE = Citation.of("Lemmon 2003",
@@ -88,11 +86,9 @@ public final class Lemmon2003PseudoPureBlend implements Fluid {
     /** IIR reference entropy [J/(kg K)] (IIR convention, common practice). */
     private static final double IIR_ENTROPY = 1_000;
 
-    private static final int MAX_ITER = 100;
     /** Most steps when bracketing a density root. */
     private static final int MARCH = 400;
 
-    private final String name;
     private final HelmholtzFluid eos;
     private final HelmholtzEos helmholtz;
     private final Ancillary liquidStart;
@@ -101,19 +97,14 @@ public final class Lemmon2003PseudoPureBlend implements Fluid {
     private final SaturationPressureEquation dew;
     private final double dh;
     private final double ds;
-    private final double tMin;
-    private final double tMax;
     private final double tc;
     private final double pc;
     private final double rhoc;
-    private final double pMax;
     /** Bubble pressure at tMin: the lowest pressure with both saturation states in range [Pa]. */
     private final double pMinSat;
     /** Dew pressure at tMin: below it every state in range is vapour [Pa]. */
     private final double pMinDew;
     private final FluidInfo info;
-    /** Transport properties, built on first use (benign race: every build gives an equal object). */
-    private volatile TransportProperties transport;
 
     /**
      * @param info   the blend's constants; its composition must be given
@@ -125,22 +116,19 @@ public final class Lemmon2003PseudoPureBlend implements Fluid {
      */
     Lemmon2003PseudoPureBlend(FluidInfo info, HelmholtzFluid eos, SaturationPressureEquation bubble,
             SaturationPressureEquation dew, Ancillary liquidStart) {
+        super(info.name(), eos.info().minTemperature(), eos.info().maxTemperature(), eos.info().maxPressure());
         if (!info.isBlend()) {
             throw new IllegalArgumentException(info.name() + ": a blend needs its composition");
         }
-        this.name = info.name();
         this.eos = eos;
         this.bubble = bubble;
         this.dew = dew;
         this.helmholtz = eos.equationOfState();
         this.liquidStart = liquidStart;
         FluidInfo e = eos.info();
-        this.tMin = e.minTemperature();
-        this.tMax = e.maxTemperature();
         this.tc = e.criticalTemperature();
         this.pc = e.criticalPressure();
         this.rhoc = e.criticalDensity();
-        this.pMax = e.maxPressure();
         this.rhoMax = 1.5 * liquidStart.at(tMin) * helmholtz.molarMass();
         double rhoRef = liquidDensity(IIR_TEMPERATURE, bubble.pressure(IIR_TEMPERATURE));
         HelmholtzEos.Properties ref = helmholtz.properties(IIR_TEMPERATURE, rhoRef);
@@ -148,15 +136,10 @@ public final class Lemmon2003PseudoPureBlend implements Fluid {
         this.ds = IIR_ENTROPY - ref.entropy();
         this.pMinSat = bubble.pressure(tMin);
         this.pMinDew = dew.pressure(tMin);
-        this.info = new FluidInfo(name, info.aliases(), info.chemicalName(), info.safetyClass(), info.gwp100(),
+        this.info = new FluidInfo(name(), info.aliases(), info.chemicalName(), info.safetyClass(), info.gwp100(),
                 info.gwpBasis(), tc, pc, e.criticalDensity(), e.molarMass(), tMin, pMinSat, tMin, tMax, pMax,
                 info.equationOfState(), "IIR: h = 200 kJ/kg and s = 1 kJ/(kg K) for the saturated liquid at the "
                         + "bubble point at 0 degC", info.composition());
-    }
-
-    @Override
-    public String name() {
-        return name;
     }
 
     @Override
@@ -176,11 +159,7 @@ public final class Lemmon2003PseudoPureBlend implements Fluid {
 
     @Override
     public SaturationState saturationAtTemperature(double temperature) {
-        Check.finite("temperature", temperature);
-        if (temperature < tMin || temperature >= tc) {
-            throw outOfRange("saturation temperature [K]", temperature,
-                    plain(tMin) + " K to below " + plain(tc) + " K");
-        }
+        requireSaturationTemperature(temperature, tc);
         FluidState liquid = onPhase(temperature, bubble.pressure(temperature), Phase.LIQUID, 0);
         FluidState vapour = onPhase(temperature, dew.pressure(temperature), Phase.VAPOUR, 1);
         return new SaturationState(liquid, vapour);
@@ -200,25 +179,7 @@ public final class Lemmon2003PseudoPureBlend implements Fluid {
     }
 
     @Override
-    public FluidState at(InputPair pair, double a, double b) {
-        if (pair == null) {
-            throw new InputException("inputPair", Msg.MISSING);
-        }
-        return switch (pair) {
-            case TP -> atTP(a, b);
-            case PH -> atPH(a, b);
-            case PQ -> {
-                Check.finite("pressure", a);
-                Check.within("quality", b, 0, 1);
-                yield mix(saturationAtPressure(a), b);
-            }
-            case TQ -> atTQ(a, b);
-        };
-    }
-
-    private FluidState atTQ(double temperature, double quality) {
-        Check.finite("temperature", temperature);
-        Check.within("quality", quality, 0, 1);
+    protected FluidState atTQ(double temperature, double quality) {
         SaturationState sat = saturationAtTemperature(temperature);
         if (quality == 0) {
             return sat.liquid();
@@ -265,7 +226,7 @@ public final class Lemmon2003PseudoPureBlend implements Fluid {
         if (Math.abs(g) <= 1e-12 * temperature) {
             return mix(saturationAtPressure(Math.exp(x)), quality);
         }
-        throw new ConvergenceException(name + " pressure at T = " + Numbers.brief(temperature) + " K, q = "
+        throw new ConvergenceException(name() + " pressure at T = " + Numbers.brief(temperature) + " K, q = "
                 + Numbers.brief(quality), MAX_ITER, g);
     }
 
@@ -281,11 +242,8 @@ public final class Lemmon2003PseudoPureBlend implements Fluid {
         return tb + quality * (td - tb);
     }
 
-    private FluidState atTP(double temperature, double pressure) {
-        Check.finite("temperature", temperature);
-        Check.finite("pressure", pressure);
-        requireTemperature(temperature);
-        requirePressure(pressure);
+    @Override
+    protected FluidState atTP(double temperature, double pressure) {
         if (temperature < tc) {
             double pb = bubble.pressure(temperature);
             double pd = dew.pressure(temperature);
@@ -302,10 +260,8 @@ public final class Lemmon2003PseudoPureBlend implements Fluid {
         return shifted(eos.at(InputPair.TP, temperature, pressure), FluidState.NO_QUALITY);
     }
 
-    private FluidState atPH(double pressure, double enthalpy) {
-        Check.finite("pressure", pressure);
-        Check.finite("enthalpy", enthalpy);
-        requirePressure(pressure);
+    @Override
+    protected FluidState atPH(double pressure, double enthalpy) {
         if (pressure >= pc) {
             return temperatureFromEnthalpy(pressure, enthalpy, tMin, tMax, null, null, Phase.LIQUID);
         }
@@ -318,19 +274,11 @@ public final class Lemmon2003PseudoPureBlend implements Fluid {
             return temperatureFromEnthalpy(pressure, enthalpy, td, tMax, v, null, Phase.VAPOUR);
         }
         SaturationState sat = saturationAtPressure(pressure);
-        double hl = sat.liquid().enthalpy();
-        double hv = sat.vapour().enthalpy();
-        double edge = 1e-9 * (hv - hl);
-        if (Math.abs(enthalpy - hl) <= edge) {
-            return sat.liquid();
+        FluidState twoPhase = inSaturation(sat, enthalpy);
+        if (twoPhase != null) {
+            return twoPhase;
         }
-        if (Math.abs(enthalpy - hv) <= edge) {
-            return sat.vapour();
-        }
-        if (enthalpy > hl && enthalpy < hv) {
-            return mix(sat, (enthalpy - hl) / (hv - hl));
-        }
-        if (enthalpy < hl) {
+        if (enthalpy < sat.liquid().enthalpy()) {
             return temperatureFromEnthalpy(pressure, enthalpy, tMin, sat.bubbleTemperature(), null, sat.liquid(),
                     Phase.LIQUID);
         }
@@ -382,7 +330,7 @@ public final class Lemmon2003PseudoPureBlend implements Fluid {
             }
             t = tn;
         }
-        throw new ConvergenceException(name + " temperature at p = " + Numbers.brief(p) + " Pa, h = "
+        throw new ConvergenceException(name() + " temperature at p = " + Numbers.brief(p) + " Pa, h = "
                 + Numbers.brief(h) + " J/kg", MAX_ITER, f);
     }
 
@@ -435,7 +383,7 @@ public final class Lemmon2003PseudoPureBlend implements Fluid {
             double next = hi / (1 + step);
             double[] pn = helmholtz.pressureAndSlope(t, next);
             if (it > MARCH || step < 1e-10) {
-                throw new ConvergenceException(name + " liquid density at T = " + Numbers.brief(t) + " K, p = "
+                throw new ConvergenceException(name() + " liquid density at T = " + Numbers.brief(t) + " K, p = "
                         + Numbers.brief(p) + " Pa (no liquid root above the spinodal)", it, pn[0] / p - 1);
             }
             if (!(pn[1] > 0)) {
@@ -448,7 +396,7 @@ public final class Lemmon2003PseudoPureBlend implements Fluid {
             }
             hi = next;
         }
-        return solveDensity(t, p, lo, hi, 0.5 * (lo + hi));
+        return solveDensity(helmholtz, t, p, lo, hi, 0.5 * (lo + hi));
     }
 
     /**
@@ -462,7 +410,7 @@ public final class Lemmon2003PseudoPureBlend implements Fluid {
         for (int it = 0; ; it++) {
             double[] ps = helmholtz.pressureAndSlope(t, hi);
             if (it > MARCH || step < 1e-10) {
-                throw new ConvergenceException(name + " vapour density at T = " + Numbers.brief(t) + " K, p = "
+                throw new ConvergenceException(name() + " vapour density at T = " + Numbers.brief(t) + " K, p = "
                         + Numbers.brief(p) + " Pa (no vapour root below the spinodal)", it, ps[0] / p - 1);
             }
             if (!(ps[1] > 0)) {
@@ -476,75 +424,12 @@ public final class Lemmon2003PseudoPureBlend implements Fluid {
             lo = hi;
             hi = lo * (1 + step);
         }
-        return solveDensity(t, p, lo, hi, hi);
-    }
-
-    /** Newton iteration with bisection fallback for p(T, rho) = p with rho in [lo, hi]. */
-    private double solveDensity(double t, double p, double lo, double hi, double guess) {
-        double x = guess;
-        double f = Double.NaN;
-        for (int it = 0; it < MAX_ITER; it++) {
-            double[] ps = helmholtz.pressureAndSlope(t, x);
-            f = ps[0] - p;
-            if (f == 0) {
-                return x;
-            }
-            if (f > 0) {
-                hi = x;
-            } else {
-                lo = x;
-            }
-            double xn = x - f / ps[1];
-            if (ps[1] > 0 && (Math.abs(xn - x) <= 1e-13 * x || Math.abs(f) <= 1e-13 * p)) {
-                return xn;
-            }
-            if (!(ps[1] > 0) || !(xn > lo && xn < hi)) {
-                xn = 0.5 * (lo + hi);
-            }
-            x = xn;
-        }
-        throw new ConvergenceException(name + " density at T = " + Numbers.brief(t) + " K, p = "
-                + Numbers.brief(p) + " Pa", MAX_ITER, f / p);
+        return solveDensity(helmholtz, t, p, lo, hi, hi);
     }
 
     private FluidState shifted(FluidState s, double quality) {
         return new FluidState(s.temperature(), s.pressure(), s.density(), s.enthalpy() + dh, s.entropy() + ds,
                 s.cp(), s.cv(), s.speedOfSound(), s.phase(), quality);
-    }
-
-    private static FluidState mix(SaturationState sat, double q) {
-        if (q == 0) {
-            return sat.liquid();
-        }
-        if (q == 1) {
-            return sat.vapour();
-        }
-        FluidState l = sat.liquid();
-        FluidState v = sat.vapour();
-        double vol = (1 - q) / l.density() + q / v.density();
-        double t = l.temperature() + q * (v.temperature() - l.temperature());
-        return new FluidState(t, v.pressure(), 1 / vol, l.enthalpy() + q * (v.enthalpy() - l.enthalpy()),
-                l.entropy() + q * (v.entropy() - l.entropy()), 0, 0, 0, Phase.TWO_PHASE, q);
-    }
-
-    private void requireTemperature(double t) {
-        if (t < tMin || t > tMax) {
-            throw outOfRange("T [K]", t, plain(tMin) + " K to " + plain(tMax) + " K");
-        }
-    }
-
-    private void requirePressure(double p) {
-        if (!(p > 0) || p > pMax) {
-            throw outOfRange("p [Pa]", p, "above 0 Pa up to " + plain(pMax) + " Pa");
-        }
-    }
-
-    private static String plain(double v) {
-        return java.math.BigDecimal.valueOf(v).stripTrailingZeros().toPlainString();
-    }
-
-    private OutOfRangeException outOfRange(String property, double value, String range) {
-        return new OutOfRangeException(Msg.FLUID_OUT_OF_RANGE, name, property, value, range);
     }
 
     /**
@@ -555,17 +440,12 @@ public final class Lemmon2003PseudoPureBlend implements Fluid {
      *         {@link #saturationAtPressure}
      */
     @Override
-    public TransportProperties transport() {
-        TransportProperties t = transport;
-        if (t == null) {
-            t = org.finstack.fluid.transport.BlendTransport.forBlend(this);
-            transport = t;
-        }
-        return t;
+    protected TransportProperties buildTransport() {
+        return org.finstack.fluid.transport.BlendTransport.forBlend(this);
     }
 
     @Override
     public String toString() {
-        return name + " (" + info.equationOfState().key() + ", pseudo-pure)";
+        return name() + " (" + info.equationOfState().key() + ", pseudo-pure)";
     }
 }
