@@ -9,7 +9,6 @@ import org.finstack.core.OutOfRangeException;
 import org.finstack.fluid.Fluid;
 import org.finstack.fluid.FluidState;
 import org.finstack.fluid.InputPair;
-import org.finstack.fluid.Phase;
 import org.finstack.fluid.SaturationState;
 import org.finstack.fluid.TransportProperties;
 import org.finstack.fluid.eos.HelmholtzEos;
@@ -159,28 +158,17 @@ public abstract class HelmholtzBackEnd implements Fluid {
     }
 
     /**
-     * The two-phase state of quality q between the saturated liquid and vapour (or bubble and dew
-     * points) of {@code sat}: specific volume, enthalpy and entropy linear in q, the temperature
-     * linear in q between the two states' temperatures (equal for a pure fluid), the pressure the
-     * vapour's; q = 0 and q = 1 give the saturated states themselves.
+     * The two-phase state of quality q by the lever rule ({@link TwoPhase#mix}), its temperature
+     * linear in q between the two saturated states' temperatures (equal for a pure fluid, the
+     * bubble and dew points for a blend).
      *
      * @param sat the saturation state
      * @param q   quality, 0 to 1
      * @return the state
      */
     protected static FluidState mix(SaturationState sat, double q) {
-        if (q == 0) {
-            return sat.liquid();
-        }
-        if (q == 1) {
-            return sat.vapour();
-        }
-        FluidState l = sat.liquid();
-        FluidState v = sat.vapour();
-        double vol = (1 - q) / l.density() + q / v.density();
-        double t = l.temperature() + q * (v.temperature() - l.temperature());
-        return new FluidState(t, v.pressure(), 1 / vol, l.enthalpy() + q * (v.enthalpy() - l.enthalpy()),
-                l.entropy() + q * (v.entropy() - l.entropy()), 0, 0, 0, Phase.TWO_PHASE, q);
+        double tl = sat.liquid().temperature();
+        return TwoPhase.mix(sat, q, tl + q * (sat.vapour().temperature() - tl));
     }
 
     /**

@@ -8,9 +8,9 @@ import org.finstack.fluid.Fluid;
 import org.finstack.fluid.FluidInfo;
 import org.finstack.fluid.FluidState;
 import org.finstack.fluid.InputPair;
-import org.finstack.fluid.Phase;
 import org.finstack.fluid.SaturationState;
 import org.finstack.fluid.TransportProperties;
+import org.finstack.fluid.internal.TwoPhase;
 
 /**
  * A fast stand-in for an exact {@link Fluid} (normally a {@link org.finstack.fluid.HelmholtzFluid}):
@@ -248,18 +248,7 @@ public final class TabulatedFluid implements Fluid {
 
     /** Two-phase state of a pure fluid by the lever rule (specific volume, h and s linear in q). */
     private static FluidState mix(SaturationState sat, double q) {
-        if (q == 0) {
-            return sat.liquid();
-        }
-        if (q == 1) {
-            return sat.vapour();
-        }
-        FluidState l = sat.liquid();
-        FluidState v = sat.vapour();
-        double vol = (1 - q) / l.density() + q / v.density();
-        return new FluidState(l.temperature(), v.pressure(), 1 / vol,
-                l.enthalpy() + q * (v.enthalpy() - l.enthalpy()), l.entropy() + q * (v.entropy() - l.entropy()),
-                0, 0, 0, Phase.TWO_PHASE, q);
+        return TwoPhase.mix(sat, q, sat.liquid().temperature());
     }
 
     /**
