@@ -194,6 +194,31 @@ class WorkbenchFieldGuiTest extends WorkbenchGuiFixture {
         assertThat(onEdt(() -> panel.field("measured.volumeFlow").error())).startsWith("measured.volumeFlow");
     }
 
+    /**
+     * Found in review: a negative accuracy was refused as "accuracy: must not be negative" (no
+     * reading named, no field marked), and a negative airflow the same way, its share turned
+     * negative before the study could refuse the airflow itself.
+     */
+    @Test
+    void aNegativeAccuracyOrAirflowIsRefusedNamingTheReading() {
+        window.tabbedPane("tabs").selectTab(Messages.get("field.tab.diagnosis"));
+        DiagnosisPanel panel = (DiagnosisPanel) window.panel("field.diagnosis").target();
+        String inAccuracy = "measured.airInletTemperature.accuracy";
+        window.textBox(OUT).setText("39 C");
+        window.textBox(inAccuracy).setText("-0.3 K");
+        window.button("diagnosis.run").click();
+        awaitCondition("refused", () -> !panel.error().isBlank());
+        assertThat(onEdt(panel::error)).contains(inAccuracy + ": must not be negative");
+        assertThat(onEdt(() -> ((QuantityField) window.textBox(inAccuracy).target()).error())).startsWith(inAccuracy);
+        assertThat(onEdt(panel::diagnosis)).isNull();
+        window.textBox(inAccuracy).setText("0.3 K");
+        window.textBox("measured.volumeFlow").setText("-5000 m3/h");
+        window.button("diagnosis.run").click();
+        awaitCondition("refused", () -> panel.error().contains("measured.volumeFlow"));
+        assertThat(onEdt(panel::error)).contains("measured.volumeFlow: must be greater than zero");
+        assertThat(onEdt(() -> panel.field("measured.volumeFlow").error())).startsWith("measured.volumeFlow");
+    }
+
     // --- helpers ---
 
     private static String cell(JTable t, int row, String column) {
