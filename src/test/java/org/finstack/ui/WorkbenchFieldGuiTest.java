@@ -219,6 +219,18 @@ class WorkbenchFieldGuiTest extends WorkbenchGuiFixture {
         assertThat(onEdt(() -> panel.field("measured.volumeFlow").error())).startsWith("measured.volumeFlow");
     }
 
+    /** Found in review: a field Run could not read was marked, but the status line said nothing. */
+    @Test
+    void aFoulingFieldRunCannotReadIsNamedOnTheStatusLine() {
+        window.tabbedPane("tabs").selectTab(Messages.get("field.tab.fouling"));
+        FoulingPanel panel = (FoulingPanel) window.panel("field.fouling").target();
+        window.textBox("fouling.maxThickness").setText("5 kg");
+        window.button("fouling.run").click();
+        window.label("fouling.status").requireText(java.util.regex.Pattern.compile("fouling\\.maxThickness: .*"));
+        window.button("fouling.run").requireEnabled();
+        assertThat(onEdt(panel::outcome)).isNull();
+    }
+
     // --- helpers ---
 
     private static String cell(JTable t, int row, String column) {
