@@ -231,6 +231,23 @@ class WorkbenchFieldGuiTest extends WorkbenchGuiFixture {
         assertThat(onEdt(panel::outcome)).isNull();
     }
 
+    /**
+     * A result the panel cannot show (its show step refuses a value) is told as a refusal, in the
+     * panel's words, not thrown to the crash guard from the event thread.
+     */
+    @Test
+    void aResultThePanelCannotShowIsARefusalNotACrash() {
+        window.tabbedPane("tabs").selectTab(Messages.get("field.tab.fouling"));
+        FoulingPanel panel = (FoulingPanel) window.panel("field.fouling").target();
+        java.util.concurrent.atomic.AtomicReference<String> refused = new java.util.concurrent.atomic.AtomicReference<>();
+        GuiActionRunner.execute(() -> panel.runner().start(p -> Double.NaN, v -> Quantities.format(v,
+                Dimension.HEAT_FLOW, UnitSystem.SI), e -> refused.set(e.getMessage())));
+        awaitCondition("refused", () -> refused.get() != null);
+        assertThat(refused.get()).startsWith("value: ");
+        window.label("fouling.status").requireText(Messages.get("field.status.refused"));
+        window.button("fouling.run").requireEnabled();
+    }
+
     // --- helpers ---
 
     private static String cell(JTable t, int row, String column) {
