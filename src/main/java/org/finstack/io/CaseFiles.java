@@ -20,6 +20,7 @@ import org.finstack.coil.RefrigerantSide.Target;
 import org.finstack.core.Check;
 import org.finstack.core.InputException;
 import org.finstack.core.Msg;
+import org.finstack.fluid.Fluids;
 import org.finstack.geometry.Arrangement;
 import org.finstack.geometry.CoilGeometry;
 import org.finstack.material.Coating;
@@ -186,6 +187,9 @@ public final class CaseFiles {
                 ? choice(r, "saturationConvention", SaturationConvention.values(), c -> c.name().toLowerCase(Locale.ROOT))
                 : SaturationConvention.DEW;
         Model chosen = model;
+        // refused where the file is read, not at the first rating (a project's conditions are shared
+        // by every option: each would be listed as not rated and the file accepted)
+        Fluids.known(r.field("fluid"), r.text("fluid"));
         return r.build(() -> new RefrigerantSide(r.text("fluid"), duty,
                 r.quantity("saturationTemperature", Dimension.TEMPERATURE), convention,
                 // absent: 0, the model's correlation; given, it must be a film coefficient (0 is not one)
