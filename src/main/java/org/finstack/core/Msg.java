@@ -50,6 +50,8 @@ public enum Msg {
     MALFORMED_FILE(1),
     /** {0} path, {1} reason. */
     FILE_UNREADABLE(2),
+    /** {0} path, {1} reason. */
+    FILE_UNWRITABLE(2),
     /** {0} version found, {1} newest understood. */
     NEWER_VERSION(2),
     /** {0} key. */
