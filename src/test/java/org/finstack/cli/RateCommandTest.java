@@ -116,6 +116,11 @@ class RateCommandTest {
                 "coil.finPitch: fin pitch 2 m must be less than the finned length 0.9 m");
         assertRefused(rateText(ok.replace("\"2500 W/(m2 K)\"", "\"0 W/(m2 K)\"")),
                 "refrigerant.insideCoefficient: must be greater than zero");
+        assertRefused(rateText(ok.replace("\"2.2 m/s\"", "\"1000 m/s\"")),
+                "air.faceVelocity: gives an air Reynolds number of");
+        String zones = Files.readString(Path.of("examples/otterby-cooler-evaporator-tubes.json"))
+                .replace("\"6000 m3/h\"", "\"2 m3/h\"").replace("\"tubes\"", "\"zones\"");
+        assertRefused(rateText(zones), "air.volumeFlow: gives an air Reynolds number of");
         assertRefused(rateText("[1, 2]"), "case.json: must be a JSON object");
         assertRefused(rateText("null"), "case.json: must be a JSON object");
     }
