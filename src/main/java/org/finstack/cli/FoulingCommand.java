@@ -5,6 +5,7 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.Locale;
+import java.util.Map;
 import java.util.concurrent.Callable;
 import org.finstack.coil.CoilCase;
 import org.finstack.core.InputException;
@@ -78,8 +79,10 @@ final class FoulingCommand implements Callable<Integer> {
         CoilCase c = CaseFiles.read(caseFile);
         CoilFan fan = FanFiles.read(caseFile).orElse(null);
         if (insideFouling != null) {
-            c = InsideFouling.withOilFilm(c, Quantities.parse("--inside-fouling", insideFouling,
-                    Dimension.FOULING_RESISTANCE));
+            CoilCase clean = c;
+            double r = Quantities.parse("--inside-fouling", insideFouling, Dimension.FOULING_RESISTANCE);
+            c = Output.asOptions(Map.of("insideFouling", "--inside-fouling"), () -> InsideFouling.withOilFilm(clean,
+                    r));
         }
         double k = depositConductivity == null ? FoulingLevel.DUST_CONDUCTIVITY
                 : Quantities.parse("--deposit-conductivity", depositConductivity, Dimension.CONDUCTIVITY);
@@ -88,13 +91,19 @@ final class FoulingCommand implements Callable<Integer> {
         if (measuredRise != null && measuredRatio != null) {
             throw new InputException("--measured-rise", Msg.EXCLUSIVE, "--measured-rise", "--measured-ratio");
         }
-        FoulingStudy.FoulingCurve curve = FoulingStudy.curve(c, fan, k, heavy, levels);
+        CoilCase rated = c;
+        Map<String, String> options = Map.of("levels", "--levels", "maxThickness", "--max-thickness",
+                "depositThickness", "--max-thickness", "depositConductivity", "--deposit-conductivity",
+                "measuredRise", measuredRatio != null ? "--measured-ratio" : "--measured-rise",
+                "measuredRatio", "--measured-ratio");
+        FoulingStudy.FoulingCurve curve = Output.asOptions(options, () -> FoulingStudy.curve(rated, fan, k, heavy,
+                levels));
         FoulingStudy.Inferred inferred = null;
         if (measuredRise != null || measuredRatio != null) {
             double rise = measuredRise != null
                     ? Quantities.parse("--measured-rise", measuredRise, Dimension.PRESSURE_DIFFERENCE)
-                    : FoulingStudy.riseFromRatio(c, fan, measuredRatio);
-            inferred = FoulingStudy.infer(c, fan, k, rise);
+                    : Output.asOptions(options, () -> FoulingStudy.riseFromRatio(rated, fan, measuredRatio));
+            inferred = Output.asOptions(options, () -> FoulingStudy.infer(rated, fan, k, rise));
         }
         PrintWriter out = spec.commandLine().getOut();
         if (json) {

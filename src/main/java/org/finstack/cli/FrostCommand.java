@@ -5,6 +5,7 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.Locale;
+import java.util.Map;
 import java.util.concurrent.Callable;
 import org.finstack.coil.CoilCase;
 import org.finstack.core.Numbers;
@@ -58,7 +59,8 @@ final class FrostCommand implements Callable<Integer> {
         UnitSystem u = Output.system(units);
         CoilCase c = CaseFiles.read(caseFile);
         CoilFan fan = FanFiles.read(caseFile).orElse(null);
-        FrostStudy.FrostResult r = FrostStudy.march(c, fan, hours, steps, threshold);
+        FrostStudy.FrostResult r = Output.asOptions(Map.of("hours", "--hours", "steps", "--steps", "threshold",
+                "--threshold"), () -> FrostStudy.march(c, fan, hours, steps, threshold));
         PrintWriter out = spec.commandLine().getOut();
         if (json) {
             ObjectNode root = Output.envelope("frost", caseFile);

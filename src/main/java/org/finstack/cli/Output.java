@@ -78,4 +78,27 @@ final class Output {
             out.printf(Locale.ROOT, "  %-26s %5.1f %%  %s%n", label, 100 * share, "#".repeat(bar));
         }
     }
+
+    /**
+     * Runs study work whose refusals name the study's parameters ({@code hours}, {@code levels}),
+     * naming instead the options the user typed ({@code --hours}, {@code --levels}).
+     *
+     * @param <T>     what the work gives
+     * @param options study parameter to the option that set it
+     * @param work    the work
+     * @return its result
+     */
+    static <T> T asOptions(Map<String, String> options, java.util.function.Supplier<T> work) {
+        try {
+            return work.get();
+        } catch (InputException e) {
+            String option = options.get(e.field());
+            if (option == null) {
+                throw e;
+            }
+            InputException named = new InputException(option, e.msg(), e.args());
+            named.setStackTrace(e.getStackTrace());
+            throw named;
+        }
+    }
 }

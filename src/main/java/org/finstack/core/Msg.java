@@ -36,6 +36,8 @@ public enum Msg {
     MALFORMED_QUANTITY(1),
     /** {0} fin pitch, {1} fin thickness. */
     PITCH_NOT_ABOVE_THICKNESS(2),
+    /** {0} fin pitch, {1} finned length. */
+    PITCH_NOT_BELOW_LENGTH(2),
     /** {0} wall, {1} radius. */
     WALL_NOT_BELOW_RADIUS(2),
     /** {0} pitch, {1} collar diameter. */
@@ -48,6 +50,8 @@ public enum Msg {
     MALFORMED_FILE(1),
     /** {0} path, {1} reason. */
     FILE_UNREADABLE(2),
+    /** {0} path, {1} reason. */
+    FILE_UNWRITABLE(2),
     /** {0} version found, {1} newest understood. */
     NEWER_VERSION(2),
     /** {0} key. */

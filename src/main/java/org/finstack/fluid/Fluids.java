@@ -101,16 +101,28 @@ public final class Fluids {
      *                        Finstack cannot compute yet ({@link #unsupported()}), with the reason
      */
     public static Fluid byName(String name) {
+        return LOADED.computeIfAbsent(known("refrigerant.fluid", name), Fluids::load);
+    }
+
+    /**
+     * Checks a trade name without loading the fluid, so a file can be refused where it is read.
+     *
+     * @param field the field path to name in a refusal, e.g. {@code conditions.refrigerant.fluid}
+     * @param name  trade name, e.g. {@code "R-134a"}
+     * @return the canonical name
+     * @throws InputException ({@code field}) as {@link #byName(String)} refuses the name
+     */
+    public static String known(String field, String name) {
         String canonical = name == null ? null : ALIASES.get(normalise(name));
         if (canonical == null) {
             String refused = name == null ? null : UNSUPPORTED.get(normalise(name));
             if (refused != null) {
-                throw new InputException("refrigerant.fluid", Msg.UNSUPPORTED_FLUID, refused,
+                throw new InputException(field, Msg.UNSUPPORTED_FLUID, refused,
                         UnsupportedBlends.reasons().get(refused));
             }
-            throw new InputException("refrigerant.fluid", Msg.UNKNOWN_NAME, name, String.join(", ", FILES.keySet()));
+            throw new InputException(field, Msg.UNKNOWN_NAME, name, String.join(", ", FILES.keySet()));
         }
-        return LOADED.computeIfAbsent(canonical, Fluids::load);
+        return canonical;
     }
 
     /**

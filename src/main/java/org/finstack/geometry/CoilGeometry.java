@@ -94,6 +94,9 @@ public record CoilGeometry(double tubeOuterDiameter, double tubeWall, Material t
         if (finPitch <= finThickness) {
             throw new InputException("finPitch", Msg.PITCH_NOT_ABOVE_THICKNESS, finPitch, finThickness);
         }
+        if (finPitch >= finnedLength) {
+            throw new InputException("finPitch", Msg.PITCH_NOT_BELOW_LENGTH, finPitch, finnedLength);
+        }
         Objects.requireNonNull(finMaterial, "finMaterial");
         Check.atLeastOne("circuits", circuits);
         if (circuits > rows * tubesPerRow) {

@@ -17,8 +17,10 @@ import org.finstack.coil.RefrigerantSide;
 import org.finstack.coil.RefrigerantSide.Model;
 import org.finstack.coil.RefrigerantSide.SaturationConvention;
 import org.finstack.coil.RefrigerantSide.Target;
+import org.finstack.core.Check;
 import org.finstack.core.InputException;
 import org.finstack.core.Msg;
+import org.finstack.fluid.Fluids;
 import org.finstack.geometry.Arrangement;
 import org.finstack.geometry.CoilGeometry;
 import org.finstack.material.Coating;
@@ -98,6 +100,10 @@ public final class CaseFiles {
             JsonNode root = MAPPER.readTree(json);
             if (root == null || root.isMissingNode()) {
                 throw new InputException(origin, Msg.MALFORMED_FILE, "the file is empty");
+            }
+            if (!root.isObject()) {
+                throw new InputException(origin, Msg.IMPOSSIBLE, "must be a JSON object { ... }, not "
+                        + root.getNodeType().name().toLowerCase(Locale.ROOT));
             }
             return root;
         } catch (JsonProcessingException e) {
@@ -181,9 +187,14 @@ public final class CaseFiles {
                 ? choice(r, "saturationConvention", SaturationConvention.values(), c -> c.name().toLowerCase(Locale.ROOT))
                 : SaturationConvention.DEW;
         Model chosen = model;
+        // refused where the file is read, not at the first rating (a project's conditions are shared
+        // by every option: each would be listed as not rated and the file accepted)
+        Fluids.known(r.field("fluid"), r.text("fluid"));
         return r.build(() -> new RefrigerantSide(r.text("fluid"), duty,
                 r.quantity("saturationTemperature", Dimension.TEMPERATURE), convention,
-                r.quantity("insideCoefficient", Dimension.HEAT_TRANSFER_COEFFICIENT, 0),
+                // absent: 0, the model's correlation; given, it must be a film coefficient (0 is not one)
+                r.has("insideCoefficient") ? Check.positive(r.field("insideCoefficient"),
+                        r.quantity("insideCoefficient", Dimension.HEAT_TRANSFER_COEFFICIENT)) : 0,
                 r.quantity("liquidTemperature", Dimension.TEMPERATURE, 0),
                 r.quantity("inletTemperature", Dimension.TEMPERATURE, 0), target, chosen,
                 r.has("segments") ? r.count("segments") : 10));

@@ -26,6 +26,7 @@ import org.finstack.coil.FoulingResistances;
 import org.finstack.coil.RefrigerantSide;
 import org.finstack.core.InputException;
 import org.finstack.core.Msg;
+import org.finstack.core.Numbers;
 import org.finstack.geometry.CoilGeometry;
 import org.finstack.study.Conditions;
 import org.finstack.study.Constraints;
@@ -251,10 +252,26 @@ public final class ProjectFiles {
             }
         }
         Constraints.Room room = c.has("room") ? room(c.object("room", true), raw.get("room")) : null;
-        return c.build(() -> new Constraints(c.quantity("maxFaceWidth", Dimension.LENGTH, 0),
-                c.quantity("maxFaceHeight", Dimension.LENGTH, 0), c.quantity("maxDepth", Dimension.LENGTH, 0),
-                c.has("circuits") ? c.count("circuits") : 0, c.quantity("requiredCapacity", Dimension.HEAT_FLOW, 0),
-                curve, room));
+        return c.build(() -> new Constraints(limit(c, "maxFaceWidth", Dimension.LENGTH),
+                limit(c, "maxFaceHeight", Dimension.LENGTH), limit(c, "maxDepth", Dimension.LENGTH),
+                c.has("circuits") ? (int) limitValue(c, "circuits", c.count("circuits")) : 0,
+                limit(c, "requiredCapacity", Dimension.HEAT_FLOW), curve, room));
+    }
+
+    /**
+     * A limit: 0 (not set) when the key is absent, as the writer leaves it out; when given, it must
+     * be positive (a written "0 mm" or 0 circuits is an error, not a silent "no limit").
+     */
+    private static double limit(JsonFields c, String key, Dimension dim) {
+        return c.has(key) ? limitValue(c, key, c.quantity(key, dim)) : 0;
+    }
+
+    private static double limitValue(JsonFields c, String key, double v) {
+        if (!(v > 0)) {
+            throw new InputException(c.field(key), Msg.IMPOSSIBLE, "must be greater than zero, got "
+                    + Numbers.brief(v) + " (leave the key out for no limit)");
+        }
+        return v;
     }
 
     private static Constraints.Room room(JsonFields r, JsonNode raw) {

@@ -1,7 +1,12 @@
 package org.finstack.report;
 
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Objects;
+import org.finstack.core.InputException;
+import org.finstack.core.Msg;
 import org.finstack.study.Progress;
 import org.finstack.study.Project;
 import org.finstack.study.compare.BandSettings;
@@ -49,14 +54,24 @@ public final class ProjectReport {
      * @param summary the summary
      * @param file    where to write
      * @param kind    the format
-     * @throws java.io.UncheckedIOException when the file cannot be written (the old file is then unchanged)
+     * @throws InputException (the file's path, {@link Msg#FILE_UNWRITABLE}) when the file cannot be
+     *                        written, e.g. the path is a folder (the old file is then unchanged)
      */
     public static void write(Summary summary, Path file, Kind kind) {
         Objects.requireNonNull(kind, "kind");
-        switch (kind) {
-            case PDF -> PdfReport.write(summary, file);
-            case HTML -> HtmlReport.write(summary, file);
-            default -> throw new IllegalArgumentException("unknown report kind " + kind);
+        if (Files.isDirectory(file)) {
+            throw new InputException(file.toString(), Msg.FILE_UNWRITABLE, file, "it is a folder; give a file name");
+        }
+        try {
+            switch (kind) {
+                case PDF -> PdfReport.write(summary, file);
+                case HTML -> HtmlReport.write(summary, file);
+                default -> throw new IllegalArgumentException("unknown report kind " + kind);
+            }
+        } catch (UncheckedIOException e) {
+            IOException cause = e.getCause();
+            String reason = cause.getMessage() == null ? cause.getClass().getSimpleName() : cause.getMessage();
+            throw new InputException(file.toString(), Msg.FILE_UNWRITABLE, file, reason);
         }
     }
 }

@@ -25,6 +25,7 @@ import org.finstack.coil.CoilCase;
 import org.finstack.coil.Duty;
 import org.finstack.coil.FoulingResistances;
 import org.finstack.coil.RefrigerantSide;
+import org.finstack.core.Check;
 import org.finstack.core.FinstackException;
 import org.finstack.core.InputException;
 import org.finstack.study.diagnosis.Diagnosis;
@@ -278,7 +279,9 @@ final class DiagnosisPanel extends JPanel {
             out = reading(OUT);
             rh = evaporator ? reading(RH) : null;
             double q = read(rows.get(FLOW).value());
-            flow = new Reading(q, q * read(rows.get(FLOW).accuracy()));
+            // the accuracy is a share of the reading; of its size, so that a negative airflow is
+            // refused by the study as an airflow, not as a negative accuracy
+            flow = new Reading(q, Math.abs(q) * notNegative(rows.get(FLOW).accuracy()));
             sat = reading(SAT);
             outlet = reading(held);
         } catch (InputException e) {
@@ -305,7 +308,18 @@ final class DiagnosisPanel extends JPanel {
 
     private Reading reading(String key) {
         Row r = rows.get(key);
-        return new Reading(read(r.value()), read(r.accuracy()));
+        return new Reading(read(r.value()), notNegative(r.accuracy()));
+    }
+
+    /** An accuracy, refused here under its reading's own field (the study's check names only "accuracy"). */
+    private static double notNegative(QuantityField f) {
+        double v = read(f);
+        try {
+            return Check.nonNegative(f.key(), v);
+        } catch (InputException e) {
+            f.showError(e.getMessage());
+            throw e;
+        }
     }
 
     private static double read(QuantityField f) {

@@ -400,6 +400,8 @@ final class FoulingPanel extends JPanel {
             cleaning = new PaybackInputs(read(runHours), read(price), currency.getText().strip(), read(efficiency),
                     read(cleaningCost), read(otherSaturation));
         } catch (FinstackException e) {
+            // the field is marked; the status line says which and why, where the user looks after Run
+            run.problem(e.getMessage());
             return;
         }
         FanChoice choice = (FanChoice) fan.getSelectedItem();

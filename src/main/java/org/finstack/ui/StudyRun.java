@@ -210,7 +210,14 @@ final class StudyRun extends JPanel {
                     T result = get();
                     progress.setValue(100);
                     say(Messages.get("field.status.done"));
-                    done.accept(result);
+                    try {
+                        done.accept(result);
+                    } catch (FinstackException f) {
+                        // a result the panel cannot show (a value it cannot write) is refused in its
+                        // own words, not sent to the crash guard
+                        say(Messages.get("field.status.refused"));
+                        refused.accept(f);
+                    }
                 } catch (InterruptedException e) {
                     Thread.currentThread().interrupt();
                 } catch (ExecutionException e) {

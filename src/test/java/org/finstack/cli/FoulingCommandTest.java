@@ -64,8 +64,14 @@ class FoulingCommandTest {
             {"fan.type", badType.toString()},
             {"fan.curve[1].pressure", badCurve.toString()},
             {"--measured-rise", EXAMPLE, "--measured-rise", "35 kg"},
-            {"measuredRise", EXAMPLE, "--measured-rise", "5000 Pa", "--levels", "2"},
-            {"levels", EXAMPLE, "--levels", "1"},
+            // a refusal of an option's value names the option as typed (it named the study's parameter)
+            {"finstack: --measured-rise: ", EXAMPLE, "--measured-rise", "5000 Pa", "--levels", "2"},
+            {"finstack: --measured-ratio: ", EXAMPLE, "--measured-ratio", "0.5", "--levels", "2"},
+            {"finstack: --levels: ", EXAMPLE, "--levels", "1"},
+            {"finstack: --max-thickness: ", EXAMPLE, "--max-thickness", "-1 mm"},
+            {"finstack: --max-thickness: ", EXAMPLE, "--max-thickness", "50 mm"},
+            {"finstack: --deposit-conductivity: ", EXAMPLE, "--deposit-conductivity", "0 W/(m K)"},
+            {"finstack: --inside-fouling: ", EXAMPLE, "--inside-fouling", "-1 m2 K/W"},
         };
         for (String[] c : cases) {
             String[] args = new String[c.length];

@@ -43,14 +43,16 @@ class FrostCommandTest {
 
     @Test
     void badInputsEndWithOneLineAndStatusTwo() {
-        String[][] cases = {{"threshold", "--threshold", "1.5"}, {"steps", "--steps", "0"}, {"hours", "--hours", "-1"}};
+        // the refusal names the option as typed (it named the study's parameter, "hours: ...")
+        String[][] cases = {{"finstack: --threshold: ", "--threshold", "1.5"}, {"finstack: --steps: ", "--steps", "0"},
+            {"finstack: --hours: must be greater than zero", "--hours", "-1"}};
         for (String[] c : cases) {
             String[] args = c[1].equals("--hours") ? new String[] {"frost", EXAMPLE, c[1], c[2]}
                     : new String[] {"frost", EXAMPLE, "--hours", "1", c[1], c[2]};
             RateCommandTest.Run r = RateCommandTest.run(args);
             assertThat(r.code()).as(String.join(" ", args)).isEqualTo(Main.EXIT_INPUT);
             assertThat(r.err().strip().lines().count()).as(r.err()).isEqualTo(1);
-            assertThat(r.err()).contains(c[0]);
+            assertThat(r.err()).startsWith(c[0]);
         }
         RateCommandTest.Run missing = RateCommandTest.run("frost", EXAMPLE);
         assertThat(missing.code()).isEqualTo(Main.EXIT_INPUT);

@@ -103,4 +103,25 @@ class RateCommandTest {
         assertRefused(run("rate", "examples/otterby-rooftop-condenser.json", "--units", "imperial"), "--units: unknown name");
         assertRefused(rateText(ok.replace("\"version\": 1", "\"version\": 9")), "version: was written by a newer Finstack");
     }
+
+    /**
+     * Damaged copies found in the review of the study commands: a fin pitch typed in the wrong
+     * unit (longer than the coil) was rated to a pressure drop of 1e119 Pa; an explicit zero film
+     * coefficient was reported as missing; a file holding an array or {@code null} named no field.
+     */
+    @Test
+    void damagedCaseFilesAreRefusedForTheirOwnReason() throws IOException {
+        String ok = example();
+        assertRefused(rateText(ok.replace("\"2.1 mm\"", "\"2000 mm\"")),
+                "coil.finPitch: fin pitch 2 m must be less than the finned length 0.9 m");
+        assertRefused(rateText(ok.replace("\"2500 W/(m2 K)\"", "\"0 W/(m2 K)\"")),
+                "refrigerant.insideCoefficient: must be greater than zero");
+        assertRefused(rateText(ok.replace("\"2.2 m/s\"", "\"1000 m/s\"")),
+                "air.faceVelocity: gives an air Reynolds number of");
+        String zones = Files.readString(Path.of("examples/otterby-cooler-evaporator-tubes.json"))
+                .replace("\"6000 m3/h\"", "\"2 m3/h\"").replace("\"tubes\"", "\"zones\"");
+        assertRefused(rateText(zones), "air.volumeFlow: gives an air Reynolds number of");
+        assertRefused(rateText("[1, 2]"), "case.json: must be a JSON object");
+        assertRefused(rateText("null"), "case.json: must be a JSON object");
+    }
 }

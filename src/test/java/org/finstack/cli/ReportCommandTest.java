@@ -53,6 +53,17 @@ class ReportCommandTest {
         assertThat(Files.readString(html)).doesNotContain("Capacity p10 - p90");
     }
 
+    /** Found in review: a folder given as the output file was an "internal error" with exit status 1. */
+    @Test
+    void aFolderAsTheOutputFileIsOneLineWithStatus2() {
+        var r = RateCommandTest.run("report", "examples/projects/otterby-condenser-options.finstack.json", "--html",
+                dir.toString(), "--samples", "0");
+        assertThat(r.code()).isEqualTo(Main.EXIT_INPUT);
+        assertThat(r.err()).isEqualTo("finstack: " + dir + ": cannot write " + dir
+                + ": it is a folder; give a file name" + System.lineSeparator());
+        assertThat(dir).isDirectory();
+    }
+
     @Test
     void withoutAnOutputFileEndsWithStatus2() {
         var r = RateCommandTest.run("report", "examples/projects/otterby-condenser-options.finstack.json");

@@ -96,6 +96,19 @@ class CoilGeometryTest {
         assertRelative(16 * diagonal * open, t.minFlowArea(), 1e-12, "diagonal gap governs");
     }
 
+    /**
+     * A fin pitch as long as the coil or longer (a "2000 mm" typed for "2.0 mm") holds not one fin
+     * gap; rated, the correlations gave a pressure drop of 1e119 Pa. Refused at the geometry.
+     */
+    @Test
+    void finPitchNotBelowTheFinnedLengthIsRefused() {
+        CoilGeometry g = Coils.exampleCondenser();
+        assertThatThrownBy(() -> g.withFinPitch(2.0)).isInstanceOf(InputException.class)
+                .hasMessageStartingWith("finPitch: fin pitch 2 m must be less than the finned length");
+        assertThatThrownBy(() -> g.withFinPitch(g.finnedLength())).isInstanceOf(InputException.class)
+                .hasMessageStartingWith("finPitch:");
+    }
+
     @Test
     void impossibleGeometryIsRefusedNamingTheField() {
         CoilGeometry g = Coils.exampleCondenser();

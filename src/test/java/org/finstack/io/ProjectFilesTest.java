@@ -191,6 +191,30 @@ class ProjectFilesTest {
         assertThat(again).isEqualTo(back);
     }
 
+    /**
+     * Found in review: a limit written as zero ("maxDepth": "0 mm", "circuits": 0,
+     * "requiredCapacity": "0 kW") was read as "not set", and the search ran unlimited; an unknown
+     * refrigerant in the conditions was accepted and every option listed as not rated, exit 0.
+     */
+    @Test
+    void zeroLimitsAndAnUnknownFluidAreRefusedWhereTheFileIsRead() {
+        String limits = "\"maxDepth\": \"100 mm\", \"circuits\": 2";
+        assertThat(ROOMLESS).contains(limits);
+        assertThatThrownBy(() -> ProjectFiles.parse(ROOMLESS.replace(limits, "\"maxDepth\": \"0 mm\", \"circuits\": 2"),
+                "x")).isInstanceOf(InputException.class)
+                .hasMessage("constraints.maxDepth: must be greater than zero, got 0 (leave the key out for no limit)");
+        assertThatThrownBy(() -> ProjectFiles.parse(ROOMLESS.replace(limits, "\"maxDepth\": \"100 mm\", \"circuits\": 0"),
+                "x")).isInstanceOf(InputException.class).hasMessageStartingWith("constraints.circuits: must be greater");
+        assertThatThrownBy(() -> ProjectFiles.parse(ROOMLESS.replace(limits, limits + ", \"requiredCapacity\": \"0 kW\""),
+                "x")).isInstanceOf(InputException.class).hasMessageStartingWith("constraints.requiredCapacity: must be");
+        assertThat(ProjectFiles.parse(ROOMLESS.replace(limits, "\"circuits\": 2"), "x").constraints().maxDepth())
+                .as("an absent limit is still 'not set'").isZero();
+        String fluid = ROOMLESS.replaceFirst("\"fluid\": \"[^\"]*\"", "\"fluid\": \"R999\"");
+        assertThat(fluid).contains("R999");
+        assertThatThrownBy(() -> ProjectFiles.parse(fluid, "x")).isInstanceOf(InputException.class)
+                .hasMessageStartingWith("conditions.refrigerant.fluid: unknown name \"R999\"");
+    }
+
     @Test
     void badRoomValueIsOneLineNamingTheField() {
         String room = "\"circuits\": 2, \"room\": { \"volume\": \"%s\", \"floorArea\": \"60 m2\", "

@@ -194,6 +194,60 @@ class WorkbenchFieldGuiTest extends WorkbenchGuiFixture {
         assertThat(onEdt(() -> panel.field("measured.volumeFlow").error())).startsWith("measured.volumeFlow");
     }
 
+    /**
+     * Found in review: a negative accuracy was refused as "accuracy: must not be negative" (no
+     * reading named, no field marked), and a negative airflow the same way, its share turned
+     * negative before the study could refuse the airflow itself.
+     */
+    @Test
+    void aNegativeAccuracyOrAirflowIsRefusedNamingTheReading() {
+        window.tabbedPane("tabs").selectTab(Messages.get("field.tab.diagnosis"));
+        DiagnosisPanel panel = (DiagnosisPanel) window.panel("field.diagnosis").target();
+        String inAccuracy = "measured.airInletTemperature.accuracy";
+        window.textBox(OUT).setText("39 C");
+        window.textBox(inAccuracy).setText("-0.3 K");
+        window.button("diagnosis.run").click();
+        awaitCondition("refused", () -> !panel.error().isBlank());
+        assertThat(onEdt(panel::error)).contains(inAccuracy + ": must not be negative");
+        assertThat(onEdt(() -> ((QuantityField) window.textBox(inAccuracy).target()).error())).startsWith(inAccuracy);
+        assertThat(onEdt(panel::diagnosis)).isNull();
+        window.textBox(inAccuracy).setText("0.3 K");
+        window.textBox("measured.volumeFlow").setText("-5000 m3/h");
+        window.button("diagnosis.run").click();
+        awaitCondition("refused", () -> panel.error().contains("measured.volumeFlow"));
+        assertThat(onEdt(panel::error)).contains("measured.volumeFlow: must be greater than zero");
+        assertThat(onEdt(() -> panel.field("measured.volumeFlow").error())).startsWith("measured.volumeFlow");
+    }
+
+    /** Found in review: a field Run could not read was marked, but the status line said nothing. */
+    @Test
+    void aFoulingFieldRunCannotReadIsNamedOnTheStatusLine() {
+        window.tabbedPane("tabs").selectTab(Messages.get("field.tab.fouling"));
+        FoulingPanel panel = (FoulingPanel) window.panel("field.fouling").target();
+        window.textBox("fouling.maxThickness").setText("5 kg");
+        window.button("fouling.run").click();
+        window.label("fouling.status").requireText(java.util.regex.Pattern.compile("fouling\\.maxThickness: .*"));
+        window.button("fouling.run").requireEnabled();
+        assertThat(onEdt(panel::outcome)).isNull();
+    }
+
+    /**
+     * A result the panel cannot show (its show step refuses a value) is told as a refusal, in the
+     * panel's words, not thrown to the crash guard from the event thread.
+     */
+    @Test
+    void aResultThePanelCannotShowIsARefusalNotACrash() {
+        window.tabbedPane("tabs").selectTab(Messages.get("field.tab.fouling"));
+        FoulingPanel panel = (FoulingPanel) window.panel("field.fouling").target();
+        java.util.concurrent.atomic.AtomicReference<String> refused = new java.util.concurrent.atomic.AtomicReference<>();
+        GuiActionRunner.execute(() -> panel.runner().start(p -> Double.NaN, v -> Quantities.format(v,
+                Dimension.HEAT_FLOW, UnitSystem.SI), e -> refused.set(e.getMessage())));
+        awaitCondition("refused", () -> refused.get() != null);
+        assertThat(refused.get()).startsWith("value: ");
+        window.label("fouling.status").requireText(Messages.get("field.status.refused"));
+        window.button("fouling.run").requireEnabled();
+    }
+
     // --- helpers ---
 
     private static String cell(JTable t, int row, String column) {
