@@ -6,7 +6,8 @@ import org.finstack.study.Progress;
 
 /**
  * A progress sink for cancellation tests: it records the steps reported and asks to stop once
- * {@code stopAfter} of them are done.
+ * {@code stopAfter} of them are done. The tests that use it check an invariant of the
+ * {@link Progress} contract: a study stops at the first check after it is asked to.
  */
 public final class Stopper implements Progress {
 

@@ -4,7 +4,6 @@ import java.awt.BasicStroke;
 import java.awt.Color;
 import java.awt.Font;
 import java.awt.Graphics2D;
-import java.awt.RenderingHints;
 import java.awt.geom.Ellipse2D;
 import java.awt.geom.Path2D;
 import java.awt.geom.Point2D;
@@ -201,12 +200,8 @@ public final class CoilMap {
      */
     public static void paint(Graphics2D g, Rectangle2D area, CoilGeometry coil, Circuiting circuiting,
             List<TubeResult> tubes, Colouring colouring, Palette palette, Labels labels) {
-        Graphics2D g2 = (Graphics2D) g.create();
+        Graphics2D g2 = palette.canvas(g, area);
         try {
-            g2.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
-            g2.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
-            g2.setColor(palette.background());
-            g2.fill(area);
             TubeSheetView.Layout l = layout(coil, area);
             g2.setColor(palette.fin());
             g2.fill(l.plate());

@@ -1,6 +1,9 @@
 package org.finstack.ui.draw;
 
 import java.awt.Color;
+import java.awt.Graphics2D;
+import java.awt.RenderingHints;
+import java.awt.geom.Rectangle2D;
 import java.util.List;
 import java.util.Objects;
 
@@ -34,6 +37,23 @@ public record Palette(Color background, Color fin, Color finEdge, Color tube, Co
         if (circuits.isEmpty()) {
             throw new IllegalArgumentException("at least one circuit colour");
         }
+    }
+
+    /**
+     * Starts a drawing: a copy of the graphics, smoothed (shapes and text), with the area filled in
+     * the background colour. The caller disposes of it.
+     *
+     * @param g    the graphics to draw on
+     * @param area the drawing's area
+     * @return the copy to draw with
+     */
+    public Graphics2D canvas(Graphics2D g, Rectangle2D area) {
+        Graphics2D g2 = (Graphics2D) g.create();
+        g2.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
+        g2.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
+        g2.setColor(background);
+        g2.fill(area);
+        return g2;
     }
 
     /**

@@ -3,7 +3,6 @@ package org.finstack.ui.draw;
 import java.awt.Font;
 import java.awt.FontMetrics;
 import java.awt.Graphics2D;
-import java.awt.RenderingHints;
 import java.awt.geom.Rectangle2D;
 import java.awt.geom.RoundRectangle2D;
 import java.util.List;
@@ -58,12 +57,8 @@ public final class ResistanceBars {
      * @param palette the colours
      */
     public static void paint(Graphics2D g, Rectangle2D area, List<Bar> bars, Palette palette) {
-        Graphics2D g2 = (Graphics2D) g.create();
+        Graphics2D g2 = palette.canvas(g, area);
         try {
-            g2.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
-            g2.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
-            g2.setColor(palette.background());
-            g2.fill(area);
             g2.setFont(g2.getFont().deriveFont(Font.PLAIN, 12f));
             FontMetrics fm = g2.getFontMetrics();
             for (int i = 0; i < bars.size(); i++) {

@@ -4,7 +4,6 @@ import java.awt.BasicStroke;
 import java.awt.Font;
 import java.awt.FontMetrics;
 import java.awt.Graphics2D;
-import java.awt.RenderingHints;
 import java.awt.geom.Line2D;
 import java.awt.geom.Rectangle2D;
 import java.util.ArrayList;
@@ -113,12 +112,8 @@ public final class Tornado {
      */
     public static void paint(Graphics2D g, Rectangle2D area, List<Bar> bars, String title, Palette palette) {
         List<Bar> s = sorted(bars);
-        Graphics2D g2 = (Graphics2D) g.create();
+        Graphics2D g2 = palette.canvas(g, area);
         try {
-            g2.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
-            g2.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
-            g2.setColor(palette.background());
-            g2.fill(area);
             g2.setFont(g2.getFont().deriveFont(Font.PLAIN, 12f));
             FontMetrics fm = g2.getFontMetrics();
             g2.setColor(palette.text());

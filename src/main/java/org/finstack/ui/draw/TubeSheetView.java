@@ -3,7 +3,6 @@ package org.finstack.ui.draw;
 import java.awt.BasicStroke;
 import java.awt.Font;
 import java.awt.Graphics2D;
-import java.awt.RenderingHints;
 import java.awt.geom.Ellipse2D;
 import java.awt.geom.Line2D;
 import java.awt.geom.Path2D;
@@ -98,12 +97,8 @@ public final class TubeSheetView {
      */
     public static void paint(Graphics2D g, Rectangle2D area, CoilGeometry coil, Palette palette, String air,
             String caption) {
-        Graphics2D g2 = (Graphics2D) g.create();
+        Graphics2D g2 = palette.canvas(g, area);
         try {
-            g2.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
-            g2.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
-            g2.setColor(palette.background());
-            g2.fill(area);
             Layout l = layout(coil, area);
             Rectangle2D plate = l.plate();
             g2.setColor(palette.fin());
