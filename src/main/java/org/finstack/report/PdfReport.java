@@ -8,6 +8,8 @@ import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.logging.Level;
+import java.util.logging.Logger;
 import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.pdmodel.PDDocumentInformation;
 import org.apache.pdfbox.pdmodel.PDPage;
@@ -135,8 +137,20 @@ public final class PdfReport {
         }
     }
 
+    private static Logger quiet(String name) {
+        Logger log = Logger.getLogger(name);
+        log.setLevel(Level.SEVERE);
+        return log;
+    }
+
     /** A cursor that sets wrapped text down the page and notes when it runs past the bottom. */
     private static final class Text {
+        /**
+         * Held so the setting lasts: the standard fonts are not embedded (every viewer has them),
+         * and PDFBox logs a warning each time it maps one to a system font on this machine, which
+         * is noise for a person running {@code report}.
+         */
+        private static final Logger FONT_LOG = quiet("org.apache.pdfbox.pdmodel.font.PDType1Font");
         private static final PDType1Font REGULAR = new PDType1Font(Standard14Fonts.FontName.HELVETICA);
         private static final PDType1Font BOLD = new PDType1Font(Standard14Fonts.FontName.HELVETICA_BOLD);
         private static final Map<Character, Boolean> ENCODABLE = new HashMap<>();

@@ -65,6 +65,25 @@ class ReportCommandTest {
     }
 
     @Test
+    void anHtmlNameOrTheBareHtmlFlagWritesHtmlToOut() throws IOException {
+        // the form "report PROJECT --out report.pdf (and --html)": --html alone, or an .html
+        // name, makes --out an HTML report
+        Path named = dir.resolve("summary.html");
+        var a = RateCommandTest.run("report", "examples/projects/otterby-condenser-options.finstack.json", "--out",
+                named.toString(), "--samples", "0");
+        assertThat(a.code()).as(a.err()).isZero();
+        assertThat(Files.readString(named)).startsWith("<!DOCTYPE html>").contains("<table>");
+        Path flagged = dir.resolve("summary.out");
+        var b = RateCommandTest.run("report", "examples/projects/otterby-condenser-options.finstack.json", "--html",
+                "--out", flagged.toString(), "--samples", "0");
+        assertThat(b.code()).as(b.err()).isZero();
+        assertThat(Files.readString(flagged)).startsWith("<!DOCTYPE html>");
+        var c = RateCommandTest.run("report", "examples/projects/otterby-condenser-options.finstack.json", "--html");
+        assertThat(c.code()).isEqualTo(Main.EXIT_INPUT);
+        assertThat(c.err()).contains("--out");
+    }
+
+    @Test
     void withoutAnOutputFileEndsWithStatus2() {
         var r = RateCommandTest.run("report", "examples/projects/otterby-condenser-options.finstack.json");
         assertThat(r.code()).isEqualTo(2);
