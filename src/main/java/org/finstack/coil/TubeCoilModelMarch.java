@@ -27,7 +27,8 @@ import org.finstack.tubeside.SaturatedProperties;
  *
  * <p>Working state of one rating only (the caches), not shared between ratings. The circuits of a
  * pass may be marched on separate threads at once: what a segment keeps is per segment slot or per
- * circuit, and the saturation grid holds immutable nodes made once each (an atomic array near the reference pressure, a concurrent map beyond).
+ * circuit, and the saturation grid holds immutable nodes made once each (an atomic array near the
+ * reference pressure, a concurrent map beyond).
  */
 final class TubeCoilModelMarch {
 
@@ -57,7 +58,10 @@ final class TubeCoilModelMarch {
     private final Fluid fluid;
     private final RefrigerantFlow flow;
     private final boolean evaporator;
-    /** Grid nodes i in [-{@value #NEAR_NODES}, {@value #NEAR_NODES}] (p_ref / 5.5 to 5.5 p_ref), made once each when first asked for. */
+    /**
+     * Grid nodes i in [-{@value #NEAR_NODES}, {@value #NEAR_NODES}] (p_ref / 5.5 to 5.5 p_ref), made
+     * once each when first asked for.
+     */
     private final AtomicReferenceArray<Node> nearNodes = new AtomicReferenceArray<>(2 * NEAR_NODES + 1);
     /** Nodes further out. */
     private final Map<Integer, Node> farNodes = new ConcurrentHashMap<>();
