@@ -2,9 +2,13 @@ package org.finstack.ui;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
+import java.awt.Component;
+import java.awt.Container;
+import java.awt.Window;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.Arrays;
 import java.util.List;
 import javax.swing.JButton;
 import javax.swing.JProgressBar;
@@ -17,6 +21,7 @@ import org.assertj.swing.edt.GuiActionRunner;
 import org.assertj.swing.timing.Pause;
 import org.assertj.swing.timing.Timeout;
 import org.finstack.coil.CoilModels;
+import org.finstack.coil.RefrigerantSide;
 import org.finstack.coil.Rating;
 import org.finstack.report.ProjectReport;
 import org.finstack.study.Constraints;
@@ -44,8 +49,9 @@ import org.junit.jupiter.api.io.TempDir;
  * date until the next search; a bad limit is refused naming the field; the sensitivity tab's
  * tornado holds the inputs largest effect first, its first bar the largest effect of
  * study.explain run directly, and its Cancel leaves no result and the run button enabled; File
- * &gt; Export report writes a one-page PDF with the existing coil's name in it, and a file that
- * cannot be written is told in a dialog with the reason. A repaint manager fails any Swing access
+ * &gt; Export report writes a one-page PDF with the existing coil's name in it, its Cancel (in the
+ * export's progress window) writes nothing, says so and leaves the next export working, and a file
+ * that cannot be written is told in a dialog with the reason. A repaint manager fails any Swing access
  * off the event thread. Skipped without a display (CI runs it under Xvfb).
  */
 class WorkbenchStudyGuiTest extends WorkbenchGuiFixture {
@@ -285,6 +291,43 @@ class WorkbenchStudyGuiTest extends WorkbenchGuiFixture {
     }
 
     @Test
+    void aCancelledExportWritesNothingAndTheNextOneIsWritten() throws IOException {
+        // a report that takes a while: every option rated tube by tube, with its capacity band
+        Project demo = onEdt(() -> frame.model().project());
+        RefrigerantSide r = demo.conditions().refrigerant();
+        Project slow = demo.withConditions(demo.conditions().withRefrigerant(new RefrigerantSide(r.fluid(), r.duty(),
+                r.saturationTemperature(), r.convention(), r.insideCoefficient(), r.liquidTemperature(),
+                r.saturationTemperature() + 25, new RefrigerantSide.Target.Subcooling(3), RefrigerantSide.Model.TUBES,
+                10)));
+        Path pdf = dir.resolve("cancelled-report.pdf");
+        String[] status = new String[1];
+        SwingWorker<Path, Void> cancelled = onEdt(() -> {
+            SwingWorker<Path, Void> w = ReportExport.write(frame, slow, UnitSystem.SI, BandSettings.DEFAULT, pdf,
+                    ProjectReport.Kind.PDF, s -> status[0] = s);
+            Window progress = exportWindow();
+            assertThat(named(progress, "export.progress")).isInstanceOf(JProgressBar.class);
+            ((JButton) named(progress, "export.cancel")).doClick(0);
+            return w;
+        });
+        String said = Messages.format("menu.file.export.cancelled", pdf.getFileName());
+        awaitCondition("cancelled", () -> said.equals(status[0]));
+        assertThat(cancelled.isCancelled()).isTrue();
+        assertThat(onEdt(() -> exportWindows().isEmpty())).as("progress window closed").isTrue();
+        assertThat(pdf).doesNotExist();
+        // and the workbench still exports
+        Path next = dir.resolve("next-report.pdf");
+        SwingWorker<Path, Void> w = onEdt(() -> ReportExport.write(frame, frame.model().project(), UnitSystem.SI,
+                BandSettings.OFF, next, ProjectReport.Kind.PDF, s -> status[0] = s));
+        String written = Messages.format("menu.file.export.written", next);
+        awaitCondition("written", () -> w.isDone() && written.equals(status[0]));
+        try (PDDocument doc = Loader.loadPDF(next.toFile())) {
+            assertThat(doc.getNumberOfPages()).isEqualTo(1);
+        }
+        assertThat(pdf).doesNotExist();
+        assertThat(onEdt(frame::busy)).isFalse();
+    }
+
+    @Test
     void aReportThatCannotBeWrittenIsToldInADialog() throws IOException {
         Path blocker = Files.writeString(dir.resolve("not-a-folder"), "x");
         Path html = blocker.resolve("report.html");
@@ -301,6 +344,34 @@ class WorkbenchStudyGuiTest extends WorkbenchGuiFixture {
     }
 
     // --- helpers ---
+
+    /** @return the export's progress windows showing (asked on the event thread) */
+    private List<Window> exportWindows() {
+        return Arrays.stream(frame.getOwnedWindows()).filter(o -> "export.dialog".equals(o.getName())
+                && o.isShowing()).toList();
+    }
+
+    /** @return the one export progress window showing (asked on the event thread) */
+    private Window exportWindow() {
+        List<Window> shown = exportWindows();
+        assertThat(shown).as("export progress window").hasSize(1);
+        return shown.get(0);
+    }
+
+    private static Component named(Container in, String name) {
+        for (Component c : in.getComponents()) {
+            if (name.equals(c.getName())) {
+                return c;
+            }
+            if (c instanceof Container inner) {
+                Component found = named(inner, name);
+                if (found != null) {
+                    return found;
+                }
+            }
+        }
+        return null;
+    }
 
     private static String cell(JTable t, int row, String column) {
         return onEdt(() -> t.getValueAt(row, SearchPanel.COLUMNS.indexOf(column)).toString());
