@@ -3,8 +3,15 @@ package org.finstack.cli;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
+import org.finstack.coil.CoilCase;
+import org.finstack.coil.CoilModels;
 import org.finstack.core.FinstackException;
+import org.finstack.core.InputException;
+import org.finstack.core.Msg;
+import org.finstack.io.ProjectFiles;
+import org.finstack.study.Project;
 import org.finstack.ui.Workbench;
+import org.finstack.units.UnitSystem;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 
@@ -74,22 +81,42 @@ public final class Main implements Callable<Integer> {
         return code;
     }
 
-    /** With no command, opens the workbench on the demo project (or says there is no display). */
+    /**
+     * With no command, opens the workbench on the demo project; without a display, rates the demo
+     * project's existing coil on the command line instead.
+     */
     @Override
     public Integer call() {
         return startWorkbench(null, spec.commandLine().getOut(), spec.commandLine().getErr());
     }
 
     /**
-     * Starts the workbench through its entry class.
+     * Starts the workbench through its entry class; without a display, says so and rates the
+     * project's first option (the existing coil where there is one) as {@code rate} would.
      *
      * @param project a project file, or null for the demo project
      * @param out     standard output
      * @param err     standard error
-     * @return the workbench's status: {@link #STAYS_OPEN} while its window is open
+     * @return the workbench's status: {@link #STAYS_OPEN} while its window is open, 0 after the
+     *         rating without a display
      */
     static int startWorkbench(Path project, PrintWriter out, PrintWriter err) {
-        return Workbench.start(project, out, err);
+        if (Workbench.displayAvailable()) {
+            return Workbench.start(project, out, err);
+        }
+        Project p = project == null ? Workbench.demo() : ProjectFiles.read(project);
+        if (p.allOptions().isEmpty()) {
+            throw new InputException(project == null ? "demo" : project.toString(), Msg.IMPOSSIBLE,
+                    "the project has no coil to rate");
+        }
+        out.println("finstack: no display here, so the workbench cannot open; the command line rates \""
+                + p.allOptions().get(0).name() + "\" of " + (project == null ? "the demo project" : project)
+                + " instead (rate a case of your own with: java -jar target/finstack.jar rate CASE.json)");
+        out.println();
+        CoilCase c = p.caseOf(0);
+        RateCommand.table(out, c, CoilModels.rate(c), UnitSystem.SI);
+        out.flush();
+        return 0;
     }
 
     /** {@code finstack workbench [PROJECT]}: opens the desktop workbench. */

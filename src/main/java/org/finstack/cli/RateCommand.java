@@ -103,7 +103,8 @@ final class RateCommand implements Callable<Integer> {
         }
     }
 
-    private static void table(PrintWriter out, CoilCase c, Rating r, UnitSystem u) {
+    /** Prints a rating as the {@code rate} command's tables (also the headless launch's output). */
+    static void table(PrintWriter out, CoilCase c, Rating r, UnitSystem u) {
         DerivedGeometry g = r.geometry();
         Output.Table t = new Output.Table(out, u);
         out.println("Rating of " + c.coil().rows() + " rows x " + c.coil().tubesPerRow() + " tubes, "

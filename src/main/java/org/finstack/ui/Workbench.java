@@ -33,13 +33,12 @@ public final class Workbench {
      * @param project a project file to open, or null for the demo project
      * @param out     standard output
      * @param err     standard error
-     * @return {@link #STAYS_OPEN} when the window opens; 0 without a display; 2 for a file refused
+     * @return {@link #STAYS_OPEN} when the window opens; 2 for a file refused
+     * @throws IllegalStateException without a display (ask {@link #displayAvailable()} first)
      */
     public static int start(Path project, PrintWriter out, PrintWriter err) {
-        if (GraphicsEnvironment.isHeadless()) {
-            out.println(Messages.get("app.headless"));
-            out.flush();
-            return 0;
+        if (!displayAvailable()) {
+            throw new IllegalStateException("no display: the workbench cannot open");
         }
         Project p;
         try {
@@ -51,6 +50,11 @@ public final class Workbench {
         }
         SwingUtilities.invokeLater(() -> open(p, project, UiPreferences.user(), true));
         return STAYS_OPEN;
+    }
+
+    /** @return whether a window can open here (false on a machine without a display) */
+    public static boolean displayAvailable() {
+        return !GraphicsEnvironment.isHeadless();
     }
 
     /** @return the demo project bundled with the program */
