@@ -12,6 +12,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.Optional;
 import javax.swing.BorderFactory;
 import javax.swing.Box;
 import javax.swing.BoxLayout;
@@ -209,12 +210,11 @@ final class DiagnosisPanel extends JPanel {
 
     /** Shows the rows the selected option's duty needs and fills them from its conditions when the duty changed. */
     private void refresh() {
-        CoilCase c;
-        try {
-            c = model.project().caseOf(model.selected());
-        } catch (FinstackException e) {
+        Optional<CoilCase> selected = model.selectedCase();
+        if (selected.isEmpty()) {
             return;
         }
+        CoilCase c = selected.get();
         RefrigerantSide r = c.refrigerant();
         Duty duty = r.duty();
         if (duty == shownDuty) {

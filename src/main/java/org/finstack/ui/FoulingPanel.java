@@ -9,6 +9,7 @@ import java.awt.Component;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
 import javax.swing.BorderFactory;
 import javax.swing.Box;
 import javax.swing.BoxLayout;
@@ -345,12 +346,11 @@ final class FoulingPanel extends JPanel {
      * heaviest deposit and the other saturation temperature when the coil changed.
      */
     private void refresh() {
-        CoilCase c;
-        try {
-            c = model.project().caseOf(model.selected());
-        } catch (FinstackException e) {
+        Optional<CoilCase> selected = model.selectedCase();
+        if (selected.isEmpty()) {
             return;
         }
+        CoilCase c = selected.get();
         List<FanChoice> offered = new ArrayList<>();
         if (model.project().constraints().fanCurve().size() >= 2) {
             offered.add(FanChoice.PROJECT_CURVE);

@@ -6,6 +6,9 @@ import java.util.ArrayList;
 import java.util.Deque;
 import java.util.List;
 import java.util.Objects;
+import java.util.Optional;
+import org.finstack.coil.CoilCase;
+import org.finstack.core.FinstackException;
 import org.finstack.study.Option;
 import org.finstack.study.Project;
 import org.finstack.units.UnitSystem;
@@ -92,6 +95,18 @@ public final class ProjectModel {
     /** @return the selected option */
     public Option option() {
         return project.allOptions().get(selected);
+    }
+
+    /**
+     * @return the selected option's case under the project's conditions, or empty while it cannot be
+     *         built (a damaged option or a bad override; the panels that rate it say why)
+     */
+    public Optional<CoilCase> selectedCase() {
+        try {
+            return Optional.of(project.caseOf(selected));
+        } catch (FinstackException e) {
+            return Optional.empty();
+        }
     }
 
     /** @return the project's file, or null when never saved */

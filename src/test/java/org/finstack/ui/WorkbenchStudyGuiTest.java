@@ -62,14 +62,20 @@ class WorkbenchStudyGuiTest extends WorkbenchGuiFixture {
     @TempDir
     Path dir;
 
-    @Test
-    void searchListsTheRankingAndAddsTheChosenCandidateAsAnOption() {
-        assertThat(onEdt(() -> frame.tabs().getTitleAt(SEARCH_TAB))).isEqualTo(Messages.get("study.tab.search"));
+    /** Opens the Search tab, lists the best five and waits for the result. */
+    private SearchPanel searchTheBestFive() {
         window.tabbedPane("tabs").selectTab(SEARCH_TAB);
         SearchPanel panel = (SearchPanel) window.panel("study.search").target();
         window.textBox("study.search.limit").setText("5");
         window.button("study.search.run").click();
         awaitCondition("searched", () -> !panel.running() && panel.result() != null);
+        return panel;
+    }
+
+    @Test
+    void searchListsTheRankingAndAddsTheChosenCandidateAsAnOption() {
+        assertThat(onEdt(() -> frame.tabs().getTitleAt(SEARCH_TAB))).isEqualTo(Messages.get("study.tab.search"));
+        SearchPanel panel = searchTheBestFive();
         // the reference: study.search run directly on the same project, and one candidate rated alone
         Project p = Workbench.demo();
         SearchResult expected = CandidateSearch.run(p, Progress.NONE);
@@ -114,12 +120,8 @@ class WorkbenchStudyGuiTest extends WorkbenchGuiFixture {
 
     @Test
     void cancelStopsTheSearchAndListsNothing() {
-        window.tabbedPane("tabs").selectTab(SEARCH_TAB);
-        SearchPanel panel = (SearchPanel) window.panel("study.search").target();
         // a search before, whose rows must not stay behind as if they were the cancelled one's
-        window.textBox("study.search.limit").setText("5");
-        window.button("study.search.run").click();
-        awaitCondition("searched", () -> !panel.running() && panel.result() != null);
+        SearchPanel panel = searchTheBestFive();
         window.table("study.search.table").requireRowCount(5);
         GuiActionRunner.execute(() -> {
             panel.run();
@@ -137,11 +139,7 @@ class WorkbenchStudyGuiTest extends WorkbenchGuiFixture {
 
     @Test
     void changedConditionsOrConstraintsMarkTheListOutOfDateUntilSearchedAgain() {
-        window.tabbedPane("tabs").selectTab(SEARCH_TAB);
-        SearchPanel panel = (SearchPanel) window.panel("study.search").target();
-        window.textBox("study.search.limit").setText("5");
-        window.button("study.search.run").click();
-        awaitCondition("searched", () -> !panel.running() && panel.result() != null);
+        SearchPanel panel = searchTheBestFive();
         assertThat(onEdt(panel::outOfDate)).isFalse();
         // an edit that leaves conditions and constraints alone: adding a candidate as an option
         window.table("study.search.table").selectRows(0);
@@ -184,11 +182,7 @@ class WorkbenchStudyGuiTest extends WorkbenchGuiFixture {
             frame.model().edit(p.withConstraints(new Constraints(k.maxFaceWidth(), k.maxFaceHeight(), k.maxDepth(),
                     k.circuits(), 0, k.fanCurve(), k.room())), frame.model().selected());
         });
-        window.tabbedPane("tabs").selectTab(SEARCH_TAB);
-        SearchPanel panel = (SearchPanel) window.panel("study.search").target();
-        window.textBox("study.search.limit").setText("5");
-        window.button("study.search.run").click();
-        awaitCondition("searched", () -> !panel.running() && panel.result() != null);
+        SearchPanel panel = searchTheBestFive();
         assertThat(onEdt(panel::outOfDate)).isFalse();
         GuiActionRunner.execute(() -> {
             Project p = frame.model().project();
